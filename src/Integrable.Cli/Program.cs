@@ -1,2 +1,5 @@
-using Integrable.Numbers;
-Console.WriteLine(new Rational(6, -4) * new Rational(6, -4) + 1);
+using Integrable.Cli;
+
+using var cts = new CancellationTokenSource();
+Console.CancelKeyPress += (_, e) => { e.Cancel = true; cts.Cancel(); };
+return CommandLineApp.Run(args, Console.Out, Console.Error, cts.Token);

@@ -29,7 +29,7 @@ public static partial class ExpressionFormatter
         return ToLatex(equation.Left) + " = " + ToLatex(equation.Right);
     }
 
-    private static void WriteLatex(StringBuilder sb, Expression e, int minLevel)
+    private static void WriteLatex(StringBuilder sb, Expression e, int minLevel, bool compact = false)
     {
         bool brackets = Level(e) < minLevel;
         if (brackets) sb.Append("\\left(");
@@ -46,27 +46,27 @@ public static partial class ExpressionFormatter
                     for (int i = 0; i < s.Subscripts.Count; i++)
                     {
                         if (i > 0) sb.Append(',');
-                        WriteLatex(sb, s.Subscripts[i], SumLevel);
+                        WriteLatex(sb, s.Subscripts[i], SumLevel, compact: true);
                     }
                     sb.Append('}');
                 }
                 break;
             case NegationExpression g:
                 sb.Append('-');
-                WriteLatex(sb, g.Operand, UnaryLevel);
+                WriteLatex(sb, g.Operand, UnaryLevel, compact);
                 break;
             case PowerExpression p:
-                WriteLatex(sb, p.Base, AtomLevel);
+                WriteLatex(sb, p.Base, AtomLevel, compact);
                 sb.Append("^{");
-                WriteLatex(sb, p.Exponent, SumLevel);
+                WriteLatex(sb, p.Exponent, SumLevel, compact);
                 sb.Append('}');
                 break;
             case SumExpression sum:
                 for (int i = 0; i < sum.Terms.Count; i++)
                 {
                     var t = sum.Terms[i];
-                    if (i > 0) sb.Append(t.IsSubtracted ? " - " : " + ");
-                    WriteLatex(sb, t.Value, ProductLevel);
+                    if (i > 0) sb.Append(compact ? (t.IsSubtracted ? "-" : "+") : (t.IsSubtracted ? " - " : " + "));
+                    WriteLatex(sb, t.Value, ProductLevel, compact);
                 }
                 break;
             case ProductExpression prod:

@@ -39,7 +39,6 @@ public sealed class ExpressionParseException : FormatException
     {
         ArgumentNullException.ThrowIfNull(input);
         ArgumentNullException.ThrowIfNull(reason);
-        string where = position >= input.Length ? "at the end of the input" : $"at position {position}";
-        return $"{reason} {where}\n{CaretDisplay.Format(input, position, length)}";
+        return $"{reason} at position {position}\n{CaretDisplay.Format(input, position, length)}";
     }
 }

@@ -168,7 +168,7 @@ internal sealed class Parser
         {
             case TokenKind.Number:
                 Advance();
-                return new NumberExpression(t.Value, SpanOf(t));
+                return new NumberExpression(Tokenizer.NumberValue(_input, t), SpanOf(t));
             case TokenKind.Identifier:
                 return ParseSymbol();
             case TokenKind.LeftParen:
@@ -214,9 +214,9 @@ internal sealed class Parser
                 Advance();
                 subscripts = [SymbolExpression.FromOwned(_input.Substring(t.Start, t.Length), [], SpanOf(t))];
                 break;
-            case TokenKind.Number when t.IsInteger:
+            case TokenKind.Number when Tokenizer.IsIntegerLiteral(_input, t):
                 Advance();
-                subscripts = [new NumberExpression(t.Value, SpanOf(t))];
+                subscripts = [new NumberExpression(Tokenizer.NumberValue(_input, t), SpanOf(t))];
                 break;
             case TokenKind.Number:
                 throw Error(t, "a subscript without braces must be a name or an integer; use braces, e.g. x_{...}");
@@ -241,7 +241,7 @@ internal sealed class Parser
 
     private void RequireNotEmpty()
     {
-        if (Current.Kind == TokenKind.End) throw Error(Current, "the input is empty");
+        if (Current.Kind == TokenKind.End) throw Error(Current, "empty input");
     }
 
     private void ExpectEnd()
@@ -259,7 +259,7 @@ internal sealed class Parser
     private ExpressionParseException Unexpected(Token t) => t.Kind switch
     {
         TokenKind.End => Error(t, "unexpected end of input"),
-        TokenKind.Invalid => Error(t, t.Reason!),
+        TokenKind.Invalid => Error(t, Tokenizer.DescribeInvalid(_input, t)),
         _ => Error(t, $"unexpected '{_input.Substring(t.Start, t.Length)}'"),
     };
 

@@ -17,7 +17,7 @@ internal enum TokenKind
     Comma,
     EqualsSign,
     Underscore,
-    /// <summary>A character that cannot start any token; <see cref="Token.Reason"/> says why.</summary>
+    /// <summary>A character that cannot start any token; <see cref="Tokenizer.DescribeInvalid"/> says why.</summary>
     Invalid,
     End,
 }

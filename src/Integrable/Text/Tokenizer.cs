@@ -42,34 +42,46 @@ internal static class Tokenizer
             };
             if (kind != TokenKind.Invalid) { tokens.Add(new Token(kind, i, 1)); i++; continue; }
             int length = char.IsHighSurrogate(c) && i + 1 < input.Length && char.IsLowSurrogate(input[i + 1]) ? 2 : 1;
-            tokens.Add(new Token(TokenKind.Invalid, i, length) { Reason = DescribeBadCharacter(input, i, length) });
+            tokens.Add(new Token(TokenKind.Invalid, i, length));
             i += length;
         }
         tokens.Add(new Token(TokenKind.End, input.Length, 0));
         return tokens;
     }
 
-    /// <summary>Reads <c>digits</c> or <c>digits.digits</c> as an exact value.</summary>
+    /// <summary>Scans <c>digits</c> or <c>digits.digits</c>.</summary>
     private static Token ReadNumber(string input, ref int i)
     {
         int start = i;
         while (i < input.Length && IdentifierRules.IsDigit(input[i])) i++;
-        var whole = input.AsSpan(start, i - start);
         if (i + 1 < input.Length && input[i] == '.' && IdentifierRules.IsDigit(input[i + 1]))
         {
-            int fracStart = ++i;
+            i++;
             while (i < input.Length && IdentifierRules.IsDigit(input[i])) i++;
-            var digits = string.Concat(whole, input.AsSpan(fracStart, i - fracStart));
-            var value = new Rational(ParseDigits(digits), BigInteger.Pow(10, i - fracStart));
-            return new Token(TokenKind.Number, start, i - start) { Value = value };
         }
-        return new Token(TokenKind.Number, start, i - start) { Value = new Rational(ParseDigits(whole)), IsInteger = true };
+        return new Token(TokenKind.Number, start, i - start);
+    }
+
+    /// <summary>True for a number token written without a decimal point.</summary>
+    public static bool IsIntegerLiteral(string input, Token t) => input.AsSpan(t.Start, t.Length).IndexOf('.') < 0;
+
+    /// <summary>The exact value of a number token.</summary>
+    public static Rational NumberValue(string input, Token t)
+    {
+        var text = input.AsSpan(t.Start, t.Length);
+        int dot = text.IndexOf('.');
+        if (dot < 0) return new Rational(ParseDigits(text));
+        var digits = string.Concat(text[..dot], text[(dot + 1)..]);
+        return new Rational(ParseDigits(digits), BigInteger.Pow(10, text.Length - dot - 1));
     }
 
     private static BigInteger ParseDigits(ReadOnlySpan<char> digits) =>
         digits.Length <= 18
             ? long.Parse(digits, NumberStyles.None, CultureInfo.InvariantCulture)
             : BigInteger.Parse(digits, NumberStyles.None, CultureInfo.InvariantCulture);
+
+    /// <summary>Why an <see cref="TokenKind.Invalid"/> token cannot start a token.</summary>
+    public static string DescribeInvalid(string input, Token t) => DescribeBadCharacter(input, t.Start, t.Length);
 
     private static string DescribeBadCharacter(string input, int i, int length)
     {

@@ -10,6 +10,9 @@ namespace Integrable.Text;
 /// Brackets are not nodes, but they are kept as nesting: <c>a + (b + c)</c> is a sum whose second term is a
 /// sum, which differs from the flat sum <c>a + b + c</c>.</para>
 /// <para>Every tree has <see cref="Depth"/> at most <see cref="MaxDepth"/>, so walking it recursively is safe.</para>
+/// <para>The node types are exactly the six records of this namespace: <see cref="NumberExpression"/>,
+/// <see cref="SymbolExpression"/>, <see cref="NegationExpression"/>, <see cref="SumExpression"/>,
+/// <see cref="ProductExpression"/> and <see cref="PowerExpression"/>.</para>
 /// </remarks>
 /// <example><code>
 /// Expression e = ExpressionParser.Parse("x_{n+1} x_{n-1} - x_n^2");
@@ -50,6 +53,10 @@ public abstract record Expression
     /// <summary>The canonical plain text, as <see cref="ExpressionFormatter.ToText(Expression)"/>.</summary>
     /// <returns>Text that parses back to an equal expression.</returns>
     public sealed override string ToString() => ExpressionFormatter.ToText(this);
+
+    /// <summary>How tightly the node binds when printed: 1 sum, 2 product, 3 negation, 4 power, 5 number or symbol.
+    /// Being internal and abstract, it also keeps the set of node types closed to this assembly.</summary>
+    internal abstract int BindingLevel { get; }
 
     /// <summary>The same node with another span (used by the parser to include brackets).</summary>
     internal Expression WithSpan(SourceSpan span) => this with { Span = span };

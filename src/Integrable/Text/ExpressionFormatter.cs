@@ -17,7 +17,7 @@ namespace Integrable.Text;
 /// </code></example>
 public static partial class ExpressionFormatter
 {
-    // Binding levels: a child printed where a higher level is required gets brackets.
+    // Binding levels (Expression.BindingLevel): a child printed where a higher level is required gets brackets.
     private const int SumLevel = 1, ProductLevel = 2, UnaryLevel = 3, PowerLevel = 4, AtomLevel = 5;
 
     /// <summary>Canonical plain text of <paramref name="expression"/>.</summary>
@@ -67,14 +67,7 @@ public static partial class ExpressionFormatter
         return sb.ToString();
     }
 
-    private static int Level(Expression e) => e switch
-    {
-        SumExpression => SumLevel,
-        ProductExpression => ProductLevel,
-        NegationExpression => UnaryLevel,
-        PowerExpression => PowerLevel,
-        _ => AtomLevel,
-    };
+    private static int Level(Expression e) => e.BindingLevel;
 
     private static void WriteText(StringBuilder sb, Expression e, int minLevel, bool compact)
     {

@@ -18,6 +18,9 @@ public sealed record NegationExpression : Expression
     /// <summary>The negated expression.</summary>
     public Expression Operand { get; }
 
+    /// <inheritdoc/>
+    internal override int BindingLevel => 3;
+
     /// <summary>Structural equality (spans ignored).</summary>
     /// <param name="other">The other negation.</param>
     /// <returns>True when the operands are equal.</returns>

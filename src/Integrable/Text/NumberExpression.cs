@@ -26,6 +26,9 @@ public sealed record NumberExpression : Expression
     /// <summary>The exact value.</summary>
     public Rational Value { get; }
 
+    /// <inheritdoc/>
+    internal override int BindingLevel => 5;
+
     /// <summary>Structural equality (spans ignored).</summary>
     /// <param name="other">The other literal.</param>
     /// <returns>True when the values are equal.</returns>

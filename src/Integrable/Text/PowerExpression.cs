@@ -51,6 +51,9 @@ public sealed record PowerExpression : Expression
     /// <summary>The integer value of <see cref="Exponent"/>.</summary>
     public int ExponentValue { get; }
 
+    /// <inheritdoc/>
+    internal override int BindingLevel => 4;
+
     /// <summary>Structural equality (spans ignored).</summary>
     /// <param name="other">The other power.</param>
     /// <returns>True when bases and exponent expressions are equal.</returns>

@@ -32,6 +32,9 @@ public sealed record ProductExpression : Expression
     /// <summary>The factors in written order.</summary>
     public IReadOnlyList<ProductFactor> Factors => _view;
 
+    /// <inheritdoc/>
+    internal override int BindingLevel => 2;
+
     /// <summary>Structural equality (spans ignored).</summary>
     /// <param name="other">The other product.</param>
     /// <returns>True when the factors and their roles are equal, in order.</returns>

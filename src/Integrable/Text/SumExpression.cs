@@ -32,6 +32,9 @@ public sealed record SumExpression : Expression
     /// <summary>The terms in written order.</summary>
     public IReadOnlyList<SumTerm> Terms => _view;
 
+    /// <inheritdoc/>
+    internal override int BindingLevel => 1;
+
     /// <summary>Structural equality (spans ignored).</summary>
     /// <param name="other">The other sum.</param>
     /// <returns>True when the terms and their signs are equal, in order.</returns>

@@ -44,6 +44,9 @@ public sealed record SymbolExpression : Expression
     /// <summary>The canonical name, e.g. <c>x_n</c>, <c>x_{n+1}</c>, <c>T_{a+1,n}</c>.</summary>
     public string Name { get; }
 
+    /// <inheritdoc/>
+    internal override int BindingLevel => 5;
+
     /// <summary>Equality by canonical name (spans ignored).</summary>
     /// <param name="other">The other symbol.</param>
     /// <returns>True when the names are equal.</returns>

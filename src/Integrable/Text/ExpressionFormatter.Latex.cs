@@ -8,7 +8,7 @@ public static partial class ExpressionFormatter
     /// <param name="expression">The expression.</param>
     /// <returns>Markup such as <c>3\,x^{2} - \frac{1}{2}\,z</c>: quotients as <c>\frac</c> (a product's divisors
     /// gathered in one denominator), subscripts and exponents in braces, factors separated by thin spaces
-    /// (<c>\cdot</c> between two numbers), Greek letters and spelled Greek names (<c>alpha</c>) as commands,
+    /// (<c>\cdot</c> before a factor that starts with a digit), Greek letters and spelled Greek names (<c>alpha</c>) as commands,
     /// other multi-letter names in <c>\mathit</c>.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="expression"/> is null.</exception>
     public static string ToLatex(Expression expression)
@@ -103,7 +103,7 @@ public static partial class ExpressionFormatter
             if (others.Count > 0)
             {
                 sb.Append("\\,");
-                WriteLatexFactors(sb, others, forceBrackets: others.Count == 1);
+                WriteLatexFactors(sb, others, afterFraction: true);
             }
             return;
         }
@@ -115,24 +115,22 @@ public static partial class ExpressionFormatter
         sb.Append('}');
     }
 
-    /// <summary>Factors joined by <c>\,</c> (or <c>\cdot</c> before a digit); a lone factor needs no brackets
-    /// unless it follows a fraction.</summary>
-    private static void WriteLatexFactors(StringBuilder sb, List<Expression> factors, bool forceBrackets = false)
+    /// <summary>Factors joined by <c>\,</c> (<c>\cdot</c> before a digit). A lone factor needs no brackets unless it
+    /// follows a fraction; a negation after another factor or a fraction is bracketed.</summary>
+    private static void WriteLatexFactors(StringBuilder sb, List<Expression> factors, bool afterFraction = false)
     {
-        if (factors.Count == 1 && !forceBrackets)
+        if (factors.Count == 1 && !afterFraction)
         {
             WriteLatex(sb, factors[0], SumLevel);
             return;
         }
         for (int i = 0; i < factors.Count; i++)
         {
-            if (i > 0)
-            {
-                var next = new StringBuilder();
-                WriteLatex(next, factors[i], factors[i] is NegationExpression ? PowerLevel : UnaryLevel); // a - after a factor needs brackets
-                sb.Append(next.Length > 0 && char.IsAsciiDigit(next[0]) ? "\\cdot " : "\\,").Append(next);
-            }
-            else WriteLatex(sb, factors[i], UnaryLevel);
+            bool follows = i > 0 || afterFraction;
+            var text = new StringBuilder();
+            WriteLatex(text, factors[i], follows && factors[i] is NegationExpression ? PowerLevel : UnaryLevel);
+            if (i > 0) sb.Append(char.IsAsciiDigit(text[0]) ? "\\cdot " : "\\,");
+            sb.Append(text);
         }
     }
 

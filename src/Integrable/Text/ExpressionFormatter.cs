@@ -12,7 +12,7 @@ namespace Integrable.Text;
 /// <c>a + (b + c)</c>. Inside subscripts the text has no spaces at all: <c>x_{n+1}</c>.</para>
 /// </remarks>
 /// <example><code>
-/// string s = ExpressionFormatter.ToText(ExpressionParser.Parse("2x y^3 - (1/2) z"));   // "2*x*y^3 - 1/2*z"
+/// string s = ExpressionFormatter.ToText(ExpressionParser.Parse("2x y^3 - 1/2 z"));      // "2*x*y^3 - 1/2*z"
 /// string t = ExpressionFormatter.ToLatex(ExpressionParser.Parse("x_{n+1}^2/(x_n + 1)")); // "\frac{x_{n+1}^{2}}{x_{n} + 1}"
 /// </code></example>
 public static partial class ExpressionFormatter

@@ -21,8 +21,9 @@ namespace Integrable.Text;
 /// <c>1/2 x</c> = <c>1/2x</c> = (1/2)·x (juxtaposition does <b>not</b> bind tighter than <c>/</c>).
 /// Juxtaposition applies when a number, name or <c>(</c> follows an operand: <c>2 x y^3</c>, <c>2x</c>,
 /// <c>g R (R + 1)</c>, <c>(x+1)(x-1)</c>, <c>x_n x_{n-1}</c>; a number directly after a number
-/// (<c>2 3</c>, <c>x^2 3</c>) is an error. A name runs over letters and digits, so <c>xy</c> is one name;
-/// write <c>x y</c> for a product.</para>
+/// (<c>2 3</c>, <c>x^2 3</c>, <c>x_1 2</c>) is an error. A name runs over letters and digits, so <c>xy</c> is one
+/// name; write <c>x y</c> for a product. There are no function calls: <c>f(x)</c> is f·x, and every name is a symbol.
+/// There is no exponent notation: <c>2e5</c> is 2·e5.</para>
 /// <para><b>Exponents</b> must be constant expressions with an integer value (<c>x^(1+1)</c> is allowed,
 /// <c>x^y</c> and <c>x^2.5</c> are not), at most <see cref="PowerExpression.MaxExponent"/> in absolute value.</para>
 /// <para><b>Subscripts</b>: <c>x_n</c>, <c>x_1</c>, <c>x_{n+1}</c>, <c>T_{a+1,n}</c>; see

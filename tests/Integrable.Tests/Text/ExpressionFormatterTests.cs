@@ -106,6 +106,10 @@ public class ExpressionFormatterTests
         { "2^3^2", @"2^{3^{2}}" },
         { "(x^2)^3", @"\left(x^{2}\right)^{3}" },
         { "0.5 x", @"0.5\,x" },
+        { "(-x)/2", @"\frac{1}{2}\,\left(-x\right)" },
+        { "x/2 (-y)", @"\frac{1}{2}\,x\,\left(-y\right)" },
+        { "-x/y", @"\frac{-x}{y}" },
+        { "x 2", @"x\cdot 2" },
     };
 
     [Theory]

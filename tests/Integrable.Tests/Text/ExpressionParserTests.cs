@@ -12,7 +12,7 @@ public class ExpressionParserTests
         ["x"] = 3, ["y"] = 5, ["z"] = 7, ["g"] = new Rational(11, 2), ["R"] = -4,
         ["a"] = new Rational(2, 3), ["b"] = -13, ["n"] = 19,
         ["x_n"] = 2, ["x_{n+1}"] = 13, ["x_{n-1}"] = 17, ["T_{a+1,n}"] = 23, ["T_{a-1,n}"] = 29, ["T_{a,n-1}"] = 31,
-        ["α"] = 37, ["β"] = 41, ["x1"] = 43, ["y2"] = 47, ["ab"] = 53,
+        ["α"] = 37, ["β"] = 41, ["x1"] = 43, ["y2"] = 47, ["ab"] = 53, ["f"] = 59, ["e5"] = 61,
     };
 
     private static readonly Rational X = 3, Y = 5, Z = 7, G = new(11, 2), R = -4;
@@ -78,6 +78,10 @@ public class ExpressionParserTests
         { "ab x", 53 * X },
         { "a b", new Rational(2, 3) * -13 },
         { "n", 19 },
+        { "f(x + 1)", 59 * (X + 1) },
+        { "2e5", 2 * 61 },
+        { "x 2", X * 2 },
+        { "(x + 1)2", (X + 1) * 2 },
         { "x\t+\ny", X + Y },
     };
 

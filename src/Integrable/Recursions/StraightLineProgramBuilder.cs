@@ -30,6 +30,12 @@ public sealed class StraightLineProgramBuilder
     /// <summary>Number of input slots.</summary>
     public int InputCount { get; }
 
+    /// <summary>The instructions emitted so far (including ones the final program may drop).</summary>
+    internal IReadOnlyList<ProgramInstruction> Instructions => _instructions;
+
+    /// <summary>The constant with table index <paramref name="index"/>.</summary>
+    internal Rational ConstantAt(int index) => _constants[index];
+
     private int Emit(ProgramInstruction ins)
     {
         if (_seen.TryGetValue(ins, out int index)) return index;

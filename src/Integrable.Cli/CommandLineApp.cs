@@ -7,6 +7,7 @@ internal static class CommandLineApp
     public static IReadOnlyList<CliCommand> Commands { get; } =
     [
         new DemoCommand(),
+        new IterateCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

@@ -109,13 +109,14 @@ internal static class EquationReader
     private static Rational BigAbs(Rational r) => Rational.Abs(r);
 
     /// <summary>Solves <paramref name="equation"/> for the term named <paramref name="target"/>
-    /// (which must enter linearly) in the program ring, whose inputs are given by <paramref name="slotOf"/>.</summary>
+    /// (which must enter linearly) in the program ring; every other symbol is the program step given
+    /// by <paramref name="stepOf"/>.</summary>
     /// <returns>The program step of the solution.</returns>
-    public static int SolveFor(Equation equation, string target, ProgramRing steps, Func<SymbolExpression, int> slotOf)
+    public static int SolveFor(Equation equation, string target, ProgramRing steps, Func<SymbolExpression, int> stepOf)
     {
         var ring = new UnknownRationalFunctionRing(steps);
         UnknownRationalFunction Resolve(SymbolExpression s) =>
-            s.Name == target ? ring.Unknown : ring.Constant(steps.Input(slotOf(s)));
+            s.Name == target ? ring.Unknown : ring.Constant(stepOf(s));
         UnknownRationalFunction left, right;
         try
         {
@@ -142,11 +143,11 @@ internal static class EquationReader
 
     /// <summary>Like <see cref="SolveFor"/> but returns false instead of throwing when the target
     /// does not enter linearly (used for the optional backward rule).</summary>
-    public static bool TrySolveFor(Equation equation, string target, ProgramRing steps, Func<SymbolExpression, int> slotOf, out int solution)
+    public static bool TrySolveFor(Equation equation, string target, ProgramRing steps, Func<SymbolExpression, int> stepOf, out int solution)
     {
         try
         {
-            solution = SolveFor(equation, target, steps, slotOf);
+            solution = SolveFor(equation, target, steps, stepOf);
             return true;
         }
         catch (EquationException)

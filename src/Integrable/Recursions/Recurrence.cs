@@ -106,12 +106,12 @@ public sealed class Recurrence
             return order + parameters.Length; // the index
         }
         var forward = new ProgramRing(inputs);
-        int fwd = EquationReader.SolveFor(eq, TermAt(high), forward, s => SlotOf(s, low));
+        int fwd = EquationReader.SolveFor(eq, TermAt(high), forward, s => forward.Input(SlotOf(s, low)));
         var rule = forward.Builder.Build(fwd);
 
         StraightLineProgram? inverse = null;
         var backward = new ProgramRing(inputs);
-        if (EquationReader.TrySolveFor(eq, TermAt(low), backward, s => SlotOf(s, low + 1), out int bwd))
+        if (EquationReader.TrySolveFor(eq, TermAt(low), backward, s => backward.Input(SlotOf(s, low + 1)), out int bwd))
             inverse = backward.Builder.Build(bwd);
 
         return new Recurrence(equation, eq, unknown, shape.Index, order, low, parameters, shape.UsesIndex, rule, inverse);

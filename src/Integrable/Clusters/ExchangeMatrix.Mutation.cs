@@ -81,33 +81,50 @@ public sealed partial class ExchangeMatrix
         int n = MutableCount, rows = RowCount;
         var src = _b;
         var dst = new int[src.Length];
+        int kOffset = k * n;
         for (int i = 0; i < rows; i++)
         {
             int rowOffset = i * n;
-            long bik = src[rowOffset + k];
-            if (i == k || bik == 0)
+            int bik = src[rowOffset + k];
+            if (i == k)
             {
-                // Row k is negated; a row with b_ik = 0 only has its k-th entry negated (which is 0).
-                if (i == k)
-                    for (int j = 0; j < n; j++) dst[rowOffset + j] = -src[rowOffset + j];
-                else
-                    Array.Copy(src, rowOffset, dst, rowOffset, n);
+                for (int j = 0; j < n; j++) dst[rowOffset + j] = -src[rowOffset + j];
                 continue;
             }
-            long absBik = Math.Abs(bik);
-            int kOffset = k * n;
-            for (int j = 0; j < n; j++)
+            if (bik == 0)
             {
-                long bij = src[rowOffset + j];
-                if (j == k) { dst[rowOffset + j] = (int)-bij; continue; }
-                long bkj = src[kOffset + j];
-                long v = bij + (absBik * bkj + bik * Math.Abs(bkj)) / 2;
-                if (v > int.MaxValue || v <= int.MinValue)
-                    throw new OverflowException(
-                        $"mutation in direction {k + 1} makes entry b_{i + 1},{j + 1} = {v}, which does not fit in 32 bits");
-                dst[rowOffset + j] = (int)v;
+                // b'_ij = b_ij for j ≠ k, and b'_ik = −0 = 0.
+                Array.Copy(src, rowOffset, dst, rowOffset, n);
+                continue;
             }
+            for (int j = 0; j < n; j++)
+                dst[rowOffset + j] = j == k ? -bik : Mutated(src[rowOffset + j], bik, src[kOffset + j], i, j, k);
         }
         return new ExchangeMatrix(n, FrozenCount, dst, _d);
     }
+
+    /// <summary>Entry (0-based <paramref name="i"/>, <paramref name="j"/>) of μ_k(B̃) without building it.</summary>
+    internal int MutatedEntry(int k, int i, int j)
+    {
+        int n = MutableCount;
+        int bij = _b[i * n + j];
+        if (i == k || j == k) return -bij;
+        return Mutated(bij, _b[i * n + k], _b[k * n + j], i, j, k);
+    }
+
+    /// <summary>b_ij + (|b_ik| b_kj + b_ik |b_kj|)/2 for i, j ≠ k, checked to fit in 32 bits (and not
+    /// to be <see cref="int.MinValue"/>).</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    private static int Mutated(int bij, int bik, int bkj, int i, int j, int k)
+    {
+        // The correction is non-zero only when b_ik and b_kj have the same sign; it is then b_ik·b_kj·sign.
+        if (bik == 0 || bkj == 0 || (bik ^ bkj) < 0) return bij;
+        long v = bij + (bik > 0 ? (long)bik * bkj : -(long)bik * bkj);
+        if (v > int.MaxValue || v <= int.MinValue) ThrowEntryOverflow(v, i, j, k);
+        return (int)v;
+    }
+
+    private static void ThrowEntryOverflow(long v, int i, int j, int k) =>
+        throw new OverflowException(
+            $"mutation in direction {k + 1} makes entry b_{i + 1},{j + 1} = {v}, which does not fit in 32 bits");
 }

@@ -31,7 +31,7 @@ public sealed partial class ExchangeMatrix : IEquatable<ExchangeMatrix>
 {
     private readonly int[] _b;      // row-major, (n + m) rows of n entries
     private readonly long[] _d;     // minimal symmetriser, length n
-    private readonly int _hash;
+    private int _hash;              // computed on first use; 0 = not yet (a computed 0 is stored as 1)
 
     /// <summary>Creates an exchange matrix from its entries; the number of columns is the number n of
     /// mutable directions and the rows after the first n are frozen (coefficient) rows.</summary>
@@ -53,7 +53,6 @@ public sealed partial class ExchangeMatrix : IEquatable<ExchangeMatrix>
         FrozenCount = rows - n;
         _b = b;
         _d = FindSymmetrizer(n, b, nameof(entries));
-        _hash = ComputeHash(n, rows - n, b);
     }
 
     /// <summary>Trusted constructor: the caller guarantees shape, entries and symmetriser.</summary>
@@ -64,7 +63,6 @@ public sealed partial class ExchangeMatrix : IEquatable<ExchangeMatrix>
         FrozenCount = m;
         _b = b;
         _d = d;
-        _hash = ComputeHash(n, m, b);
     }
 
     /// <summary>Creates an exchange matrix from its entries listed row by row.</summary>
@@ -171,14 +169,24 @@ public sealed partial class ExchangeMatrix : IEquatable<ExchangeMatrix>
     /// <inheritdoc/>
     public bool Equals(ExchangeMatrix? other) =>
         other is not null && (ReferenceEquals(this, other) ||
-            (other._hash == _hash && other.MutableCount == MutableCount && other.FrozenCount == FrozenCount
+            (other.GetHashCode() == GetHashCode() && other.MutableCount == MutableCount && other.FrozenCount == FrozenCount
              && other._b.AsSpan().SequenceEqual(_b)));
 
     /// <inheritdoc/>
     public override bool Equals(object? obj) => Equals(obj as ExchangeMatrix);
 
     /// <inheritdoc/>
-    public override int GetHashCode() => _hash;
+    public override int GetHashCode()
+    {
+        int h = _hash;
+        if (h == 0)
+        {
+            h = ComputeHash(MutableCount, FrozenCount, _b);
+            if (h == 0) h = 1;
+            _hash = h;   // benign race: every thread computes the same value
+        }
+        return h;
+    }
 
     /// <summary>Value equality.</summary>
     /// <param name="left">First matrix.</param>

@@ -243,6 +243,18 @@ public sealed class Quiver : IEquatable<Quiver>
     /// <inheritdoc/>
     public override int GetHashCode() => _hash;
 
+    /// <summary>Value equality.</summary>
+    /// <param name="left">First quiver.</param>
+    /// <param name="right">Second quiver.</param>
+    /// <returns>True when both are null or equal.</returns>
+    public static bool operator ==(Quiver? left, Quiver? right) => left is null ? right is null : left.Equals(right);
+
+    /// <summary>Value inequality.</summary>
+    /// <param name="left">First quiver.</param>
+    /// <param name="right">Second quiver.</param>
+    /// <returns>True when not equal.</returns>
+    public static bool operator !=(Quiver? left, Quiver? right) => !(left == right);
+
     /// <summary>Text such as <c>quiver(3 mutable, 0 frozen: 1->2 x2, 2->3 x2, 3->1 x2)</c>.</summary>
     /// <returns>The text.</returns>
     public override string ToString()

@@ -77,9 +77,13 @@ public static class ExchangeGraph
             {
                 // A cluster variable vanished at the point (probability about D/2^61): choose new primes and points.
             }
+            catch (ExchangeGraphSearch<Fingerprint>.DegenerateValuesException)
+            {
+                // Two variables of one seed collided at the point (equally unlikely): the same remedy.
+            }
         }
         throw new InvalidOperationException(
-            $"a cluster variable vanished at the evaluation point in {Attempts} independent attempts; this should not happen");
+            $"a cluster variable vanished or two collided at the evaluation point in {Attempts} independent attempts; this should not happen");
     }
 
     /// <summary>Explores the exchange graph from a seed with variables in any ring, identifying cluster
@@ -94,7 +98,8 @@ public static class ExchangeGraph
     /// <param name="cancellationToken">Cancels the search.</param>
     /// <returns>The counts and the distinct cluster variables found.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="initial"/> is null.</exception>
-    /// <exception cref="ArgumentException">Two initial cluster variables are equal.</exception>
+    /// <exception cref="ArgumentException">Two initial cluster variables are equal, or a mutation gives a
+    /// value already present in its seed (the values are not generic enough to identify variables).</exception>
     /// <exception cref="ArgumentOutOfRangeException"><see cref="ExplorationOptions.MaxSeeds"/> is below 1.</exception>
     /// <exception cref="ExchangeDivisionException">An exchange division fails (the step is the search depth).</exception>
     /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
@@ -106,8 +111,18 @@ public static class ExchangeGraph
         ArgumentNullException.ThrowIfNull(initial);
         options = CheckOptions(options);
         var search = new RingSearch<T>(initial.Ring, initial.Frozen.ToArray(), comparer);
-        var (seeds, variables, complete, depth) =
-            search.Run(initial.Cluster, initial.Matrix, options, progress, cancellationToken);
+        int seeds, variables, depth;
+        bool complete;
+        try
+        {
+            (seeds, variables, complete, depth) = search.Run(initial.Cluster, initial.Matrix, options, progress, cancellationToken);
+        }
+        catch (ExchangeGraphSearch<T>.DegenerateValuesException e)
+        {
+            throw new ArgumentException(
+                $"the values of the initial seed are not generic: {e.Message}, so values cannot tell the cluster variables apart",
+                nameof(initial), e);
+        }
         var report = new ExchangeGraphReport(seeds, variables, complete, depth,
             $"exact equality of elements of {initial.Ring}");
         return new ExchangeGraphExploration<T>(report, [.. search.FoundValues]);

@@ -44,11 +44,14 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
             first[i] = Register(initialCluster[i]);
         }
 
-        var seedIds = new List<int[]> { first };
+        var seedIds = new List<int[]> { first };          // ids at the n mutable positions
+        var seedKeys = new List<int[]> { Sorted(first) };  // the same ids sorted: the cluster as a set
         var seedMatrix = new List<ExchangeMatrix> { matrix };
         var seedDepth = new List<int> { 0 };
         var seedParentDirection = new List<int> { -1 };
-        var index = new Dictionary<ClusterKey, int> { [ClusterKey.Of(first)] = 0 };
+        var index = new Dictionary<int[], int>(ClusterComparer.Instance) { [seedKeys[0]] = 0 };
+        var lookup = index.GetAlternateLookup<ReadOnlySpan<int>>();
+        Span<int> key = n <= 256 ? stackalloc int[n] : new int[n];
         var queue = new Queue<int>();
         queue.Enqueue(0);
         int maxDepth = 0;
@@ -60,19 +63,24 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
             cancellationToken.ThrowIfCancellationRequested();
             int s = queue.Dequeue();
             var ids = seedIds[s];
+            var sortedIds = seedKeys[s];
             var b = seedMatrix[s];
             int depth = seedDepth[s] + 1;
             for (int k = 0; k < n; k++)
             {
                 if (k == seedParentDirection[s]) continue;   // μ_k is an involution: that edge leads back
                 T value = Exchange(ids, b, k, depth);
-                var newIds = (int[])ids.Clone();
-                bool known = _ids.TryGetValue(value, out int id);
-                newIds[k] = known ? id : -1;
-                if (known && index.TryGetValue(ClusterKey.Of(newIds), out int t))
+                if (_ids.TryGetValue(value, out int id))
                 {
-                    Verify(newIds, b, k, seedIds[t], seedMatrix[t]);
-                    continue;
+                    if (Array.IndexOf(ids, id) >= 0) throw new DegenerateValuesException(k + 1, depth);
+                    Replace(sortedIds, ids[k], id, key);
+                    if (lookup.TryGetValue(key, out int t))
+                    {
+                        // Seeds are expanded in index order. If t < s, t was expanded already and the same edge was
+                        // checked from its side (or created s); μ_k is an involution, so one check per edge suffices.
+                        if (t > s) Verify(ids, k, id, b, seedIds[t], seedMatrix[t]);
+                        continue;
+                    }
                 }
                 // A new seed.
                 if (seedIds.Count >= options.MaxSeeds)
@@ -80,10 +88,19 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
                     complete = false;
                     break;
                 }
-                if (!known) newIds[k] = Register(value);
-                index.Add(ClusterKey.Of(newIds), seedIds.Count);
+                int newId = id;
+                if (!_ids.ContainsKey(value))
+                {
+                    newId = Register(value);
+                    Replace(sortedIds, ids[k], newId, key);
+                }
+                var newIds = (int[])ids.Clone();
+                newIds[k] = newId;
+                var newKey = key.ToArray();
+                index.Add(newKey, seedIds.Count);
                 queue.Enqueue(seedIds.Count);
                 seedIds.Add(newIds);
+                seedKeys.Add(newKey);
                 seedMatrix.Add(b.MutateAt(k));
                 seedDepth.Add(depth);
                 seedParentDirection.Add(k);
@@ -99,14 +116,44 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
         return (seedIds.Count, Values.Count, complete, maxDepth);
     }
 
-    /// <summary>Checks that a seed reached again, μ_k of the seed with matrix <paramref name="parent"/>,
-    /// has the recorded matrix up to the relabelling that matches the clusters.</summary>
-    private static void Verify(int[] ids, ExchangeMatrix parent, int k, int[] recordedIds, ExchangeMatrix recorded)
+    /// <summary>Thrown when the new variable of a mutation has the same value as a variable of the seed
+    /// it comes from, so values cannot identify the variables (a degenerate evaluation point).</summary>
+    internal sealed class DegenerateValuesException(int direction, int depth)
+        : Exception($"the mutation in direction {direction} at depth {depth} gives a value already present in the seed")
+    {
+    }
+
+    private static int[] Sorted(int[] ids)
+    {
+        var s = (int[])ids.Clone();
+        Array.Sort(s);
+        return s;
+    }
+
+    /// <summary>Writes the sorted ids <paramref name="sorted"/> with <paramref name="oldId"/> replaced by
+    /// <paramref name="newId"/> into <paramref name="result"/>, keeping it sorted.</summary>
+    private static void Replace(int[] sorted, int oldId, int newId, Span<int> result)
+    {
+        int w = 0;
+        bool placed = false;
+        foreach (int x in sorted)
+        {
+            if (x == oldId) continue;
+            if (!placed && newId < x) { result[w++] = newId; placed = true; }
+            result[w++] = x;
+        }
+        if (!placed) result[w] = newId;
+    }
+
+    /// <summary>Checks that a seed reached again — μ_k of the seed (<paramref name="ids"/>,
+    /// <paramref name="parent"/>), whose new variable has id <paramref name="newId"/> — has the recorded
+    /// matrix up to the relabelling that matches the clusters.</summary>
+    private static void Verify(int[] ids, int k, int newId, ExchangeMatrix parent, int[] recordedIds, ExchangeMatrix recorded)
     {
         int n = ids.Length;
-        Span<int> pi = n <= 64 ? stackalloc int[n] : new int[n];
+        Span<int> pi = n <= 256 ? stackalloc int[n] : new int[n];
         for (int i = 0; i < n; i++)
-            pi[i] = Array.IndexOf(recordedIds, ids[i]);
+            pi[i] = Array.IndexOf(recordedIds, i == k ? newId : ids[i]);
         for (int i = 0; i < parent.RowCount; i++)
         {
             int ri = i < n ? pi[i] : i;
@@ -119,31 +166,26 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
         }
     }
 
-    /// <summary>A cluster as a set: the sorted ids of its variables.</summary>
-    private readonly struct ClusterKey : IEquatable<ClusterKey>
+    /// <summary>Equality of clusters given as sorted id arrays, with span lookups that allocate nothing.</summary>
+    private sealed class ClusterComparer : IEqualityComparer<int[]>, IAlternateEqualityComparer<ReadOnlySpan<int>, int[]>
     {
-        private readonly int[] _sorted;
-        private readonly int _hash;
+        public static readonly ClusterComparer Instance = new();
 
-        private ClusterKey(int[] sorted)
+        public bool Equals(int[]? x, int[]? y) => x.AsSpan().SequenceEqual(y);
+
+        public int GetHashCode(int[] obj) => Hash(obj);
+
+        public bool Equals(ReadOnlySpan<int> alternate, int[] other) => alternate.SequenceEqual(other);
+
+        public int GetHashCode(ReadOnlySpan<int> alternate) => Hash(alternate);
+
+        public int[] Create(ReadOnlySpan<int> alternate) => alternate.ToArray();
+
+        private static int Hash(ReadOnlySpan<int> ids)
         {
-            _sorted = sorted;
             var h = new HashCode();
-            foreach (int x in sorted) h.Add(x);
-            _hash = h.ToHashCode();
+            foreach (int x in ids) h.Add(x);
+            return h.ToHashCode();
         }
-
-        public static ClusterKey Of(int[] ids)
-        {
-            var s = (int[])ids.Clone();
-            Array.Sort(s);
-            return new ClusterKey(s);
-        }
-
-        public bool Equals(ClusterKey other) => _hash == other._hash && _sorted.AsSpan().SequenceEqual(other._sorted);
-
-        public override bool Equals(object? obj) => obj is ClusterKey k && Equals(k);
-
-        public override int GetHashCode() => _hash;
     }
 }

@@ -189,6 +189,11 @@ public class ExchangeGraphTests
         // Equal initial cluster variables cannot be told apart by value.
         var ones = new Seed<Rational>(RationalField.Instance, ExchangeMatrix.Markov, [Rational.One, Rational.One, Rational.One]);
         Assert.Throws<ArgumentException>(() => ExchangeGraph.Explore(ones));
+        // At (x_1, x_2) = (1, 2) in type A_2, μ_1 gives x_1' = (1 + x_2)/x_1 = 3 and then μ_2 gives
+        // (1 + 3)/2 = 2, the value of the variable it replaces: values cannot identify variables there,
+        // which is reported rather than miscounted.
+        var degenerate = new Seed<Rational>(RationalField.Instance, ExchangeMatrix.FiniteType("A2"), [Rational.One, new Rational(2)]);
+        Assert.Throws<ArgumentException>(() => ExchangeGraph.Explore(degenerate));
         // A zero value makes an exchange division fail.
         var f = new PrimeField(101);
         var zero = new Seed<ulong>(f, ExchangeMatrix.FiniteType("A3"), [0UL, 1UL, 2UL]);

@@ -10,6 +10,10 @@ namespace Integrable.Clusters;
 /// <remarks>Relation t (<see cref="Relations"/>[t − 1]) gives x_j for j ≡ N + t (mod r). Example: the
 /// Somos-4 quiver with period 1 gives x_{n+4} x_n = x_{n+3} x_{n+1} + x_{n+2}^2. Frozen variables y_1, …,
 /// y_m are constant coefficients. Built by <see cref="MutationPeriodicity"/>.</remarks>
+/// <example><code>
+/// var rec = MutationPeriodicity.FindRecurrence(ExchangeMatrix.Kronecker)!;   // x_{n+2} x_n = 1 + x_{n+1}^2
+/// var terms = rec.Iterate(RationalField.Instance, [Rational.One, Rational.One], [], 8);   // 1, 1, 2, 5, 13, 34, 89, 233
+/// </code></example>
 public sealed class ClusterRecurrence
 {
     internal ClusterRecurrence(int order, int frozenCount, int[] directions, int[] permutation, RecurrenceRelation[] relations)

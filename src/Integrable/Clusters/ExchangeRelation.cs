@@ -8,6 +8,10 @@ namespace Integrable.Clusters;
 /// and m frozen variables x_1, …, x_{n+m}.</summary>
 /// <remarks>Exponent vectors have length n + m; position p holds the exponent of x_{p+1}. At most one
 /// of p_i, q_i is non-zero for each i, and p_k = q_k = 0.</remarks>
+/// <example><code>
+/// var r = ExchangeMatrix.Parse("[[0,-1,2,-1],[1,0,-3,2],[-2,3,0,-1],[1,-2,1,0]]").ExchangeRelation(1);
+/// // r.ToString() == "x_1 x_1' = x_2 x_4 + x_3^2"
+/// </code></example>
 public sealed class ExchangeRelation : IEquatable<ExchangeRelation>
 {
     internal ExchangeRelation(int direction, int mutableCount, int[] plus, int[] minus)

@@ -7,6 +7,10 @@ namespace Integrable.Clusters;
 /// spaces, optionally in brackets, e.g. <c>1 2 3</c>, <c>1,3,2</c> or <c>[2, 1, 2]</c>.</summary>
 /// <remarks>The directions are applied first to last (the first number is the first mutation). Their
 /// range is checked against a matrix when they are used, e.g. by <see cref="ExchangeMatrix.Mutate(IEnumerable{int})"/>.</remarks>
+/// <example><code>
+/// var dirs = MutationSequence.Parse("1, 3, 2");          // [1, 3, 2]
+/// var b = ExchangeMatrix.FiniteType("A3").Mutate(dirs);  // μ_2 μ_3 μ_1 (first 1, then 3, then 2)
+/// </code></example>
 public static class MutationSequence
 {
     /// <summary>Parses a mutation sequence.</summary>

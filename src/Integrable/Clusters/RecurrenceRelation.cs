@@ -9,6 +9,10 @@ namespace Integrable.Clusters;
 /// <remarks>Lag vectors have length <see cref="ClusterRecurrence.Order"/> + <see cref="ClusterRecurrence.Period"/> − 1;
 /// position ℓ − 1 holds the exponent of x_{j−ℓ}. Coefficient vectors have length m; position f − 1
 /// holds the exponent of y_f.</remarks>
+/// <example><code>
+/// var r = MutationPeriodicity.FindRecurrence(somos4Matrix)!.Relations[0];
+/// // r.DivisorLag == 4, r.PlusExponents == [1, 0, 1, 0], r.MinusExponents == [0, 2, 0, 0]
+/// </code></example>
 public sealed class RecurrenceRelation : IEquatable<RecurrenceRelation>
 {
     internal RecurrenceRelation(int step, int direction, int divisorLag, int[] plus, int[] minus, int[] plusFrozen, int[] minusFrozen)

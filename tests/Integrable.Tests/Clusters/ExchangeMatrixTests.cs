@@ -292,6 +292,15 @@ public class ExchangeMatrixTests
     }
 
     [Fact]
+    public void FiniteType_NullName_Throws()
+    {
+        Assert.Throws<ArgumentNullException>(() => ExchangeMatrix.FiniteType(null!));
+        Assert.Throws<ArgumentNullException>(() => ExchangeMatrix.Named(null!));
+        Assert.Throws<ArgumentNullException>(() => ExchangeMatrix.FromCartanMatrix(null!));
+        Assert.Throws<ArgumentException>(() => ExchangeMatrix.FiniteType('X', 3));
+    }
+
+    [Fact]
     public void Named_KnowsSpecialQuivers()
     {
         Assert.Same(ExchangeMatrix.Markov, ExchangeMatrix.Named(" markov "));
@@ -336,6 +345,7 @@ public class ExchangeMatrixTests
     {
         Assert.Null(ExchangeMatrix.FiniteType("A3").FindPermutationTo(ExchangeMatrix.FiniteType("B3")));
         Assert.Null(ExchangeMatrix.FiniteType("A3").FindPermutationTo(ExchangeMatrix.FiniteType("A2")));
+        Assert.Throws<ArgumentNullException>(() => ExchangeMatrix.Markov.FindPermutationTo(null!));
         // Markov and −Markov differ by a transposition.
         var minus = ExchangeMatrix.Markov.Mutate(1);
         var s = ExchangeMatrix.Markov.FindPermutationTo(minus);

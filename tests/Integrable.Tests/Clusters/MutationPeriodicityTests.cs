@@ -171,6 +171,10 @@ public class MutationPeriodicityTests
         Assert.Throws<ArgumentException>(() => rec.Iterate(Q, Ones(3), [], 10));
         Assert.Throws<ArgumentException>(() => rec.Iterate(Q, Ones(4), Ones(1), 10));
         Assert.Throws<ArgumentOutOfRangeException>(() => rec.Iterate(Q, Ones(4), [], 3));
+        Assert.Throws<ArgumentNullException>(() => rec.Iterate(null!, Ones(4), [], 5));
+        Assert.Throws<ArgumentNullException>(() => rec.Iterate(Q, null!, [], 5));
+        Assert.Throws<ArgumentNullException>(() => rec.Iterate(Q, Ones(4), null!, 5));
+        Assert.Throws<ArgumentNullException>(() => MutationPeriodicity.FindPermutation(null!, [1]));
         // A zero term makes a later division fail; the error names the term.
         var e = Assert.Throws<ExchangeDivisionException>(() => rec.Iterate(Q, [Rational.Zero, Rational.One, Rational.One, Rational.One], [], 6));
         Assert.Equal(5, e.Step);

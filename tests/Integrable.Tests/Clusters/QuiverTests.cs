@@ -81,6 +81,8 @@ public class QuiverTests
         Assert.Throws<ArgumentException>(() => new Quiver(0, 0, []));
         Assert.Throws<ArgumentException>(() => new Quiver(1, -1, []));
         Assert.Throws<ArgumentNullException>(() => new Quiver(1, 0, null!));
+        // Parallel bundles adding up beyond 32 bits are rejected.
+        Assert.Throws<ArgumentException>(() => new Quiver(2, 0, [new Arrow(1, 2, int.MaxValue), new Arrow(1, 2, 1)]));
     }
 
     [Fact]

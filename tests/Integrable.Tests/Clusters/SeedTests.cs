@@ -112,6 +112,8 @@ public class SeedTests
         Assert.Throws<ArgumentOutOfRangeException>(() => s[0]);
         Assert.Throws<ArgumentOutOfRangeException>(() => s[3]);
         Assert.Throws<ArgumentException>(() => s.Permute([1, 1]));
+        Assert.Throws<ArgumentNullException>(() => s.Permute(null!));
+        Assert.Throws<ArgumentNullException>(() => s.Mutate((IEnumerable<int>)null!));
     }
 
     [Fact]

@@ -75,7 +75,7 @@ public sealed partial class ExchangeMatrix : IEquatable<ExchangeMatrix>
     /// <exception cref="NotSkewSymmetrizableException">The principal part is not skew-symmetrizable.</exception>
     public static ExchangeMatrix FromRows(int mutableCount, int frozenCount, ReadOnlySpan<int> rowMajor)
     {
-        CheckShape(mutableCount, frozenCount, nameof(mutableCount));
+        CheckShape(mutableCount, frozenCount, nameof(mutableCount), nameof(frozenCount));
         long expected = (long)(mutableCount + frozenCount) * mutableCount;
         if (rowMajor.Length != expected)
             throw new ArgumentException(
@@ -88,13 +88,15 @@ public sealed partial class ExchangeMatrix : IEquatable<ExchangeMatrix>
     /// <summary>Trusted factory for internal callers that already hold a valid matrix and its symmetriser.</summary>
     internal static ExchangeMatrix CreateUnchecked(int n, int m, int[] b, long[] d) => new(n, m, b, d);
 
-    private static void CheckShape(int n, int m, string paramName)
+    private static void CheckShape(int n, int m, string paramName, string? frozenParamName = null)
     {
         if (n < 1)
             throw new ArgumentException($"an exchange matrix needs at least one column (mutable direction), got {n}", paramName);
         if (m < 0)
-            throw new ArgumentException(
-                $"an exchange matrix with {n} columns needs at least {n} rows (n mutable rows, then frozen rows), got {n + m}", paramName);
+            throw frozenParamName is null
+                ? new ArgumentException(
+                    $"an exchange matrix with {n} columns needs at least {n} rows (n mutable rows, then frozen rows), got {n + m}", paramName)
+                : new ArgumentException($"the number of frozen rows must be at least 0, got {m}", frozenParamName);
     }
 
     /// <summary>n: the number of mutable directions (columns, and the first rows).</summary>

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Integrable.Algebra;
 using Integrable.Numbers;
 
@@ -152,6 +153,7 @@ public static class ExchangeGraph
             _inverse.Add(new Fingerprint(f.Inverse(value.A), g.Inverse(value.B)));
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         protected override Fingerprint Exchange(int[] ids, ExchangeMatrix b, int k, int depth)
         {
             ulong plusA = 1, plusB = 1, minusA = 1, minusB = 1;

@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace Integrable.Clusters;
 
 /// <summary>Breadth-first search over seeds, shared by the fingerprint and the exact explorations.
@@ -30,6 +32,7 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
     }
 
     /// <summary>Runs the search from the initial cluster values and matrix.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public (int Seeds, int Variables, bool Complete, int Depth) Run(
         IReadOnlyList<T> initialCluster, ExchangeMatrix matrix, ExplorationOptions options,
         IProgress<ExplorationProgress>? progress, CancellationToken cancellationToken)
@@ -148,6 +151,7 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
     /// <summary>Checks that a seed reached again — μ_k of the seed (<paramref name="ids"/>,
     /// <paramref name="parent"/>), whose new variable has id <paramref name="newId"/> — has the recorded
     /// matrix up to the relabelling that matches the clusters.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Verify(int[] ids, int k, int newId, ExchangeMatrix parent, int[] recordedIds, ExchangeMatrix recorded)
     {
         int n = ids.Length;

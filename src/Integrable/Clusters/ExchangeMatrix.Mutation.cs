@@ -76,6 +76,7 @@ public sealed partial class ExchangeMatrix
     }
 
     /// <summary>μ_k with a 0-based, unchecked direction.</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
     internal ExchangeMatrix MutateAt(int k)
     {
         int n = MutableCount, rows = RowCount;

@@ -49,6 +49,7 @@ public class ExchangeGraphTests
     [Theory]
     [InlineData("E6", 36, new[] { 1, 4, 5, 7, 8, 11 }, 42, 833)]
     [InlineData("E7", 63, new[] { 1, 5, 7, 9, 11, 13, 17 }, 70, 4160)]
+    [InlineData("E8", 120, new[] { 1, 7, 11, 13, 17, 19, 23, 29 }, 128, 25080)]
     [InlineData("F4", 24, new[] { 1, 5, 7, 11 }, 28, 105)]
     [InlineData("G2", 6, new[] { 1, 5 }, 8, 8)]
     public void Explore_ExceptionalType_MatchesRootSystemCounts(string type, int positiveRoots, int[] exponents, int variables, int clusters)

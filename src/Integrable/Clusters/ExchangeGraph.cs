@@ -154,13 +154,13 @@ public static class ExchangeGraph
         }
 
         [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-        protected override Fingerprint Exchange(int[] ids, ExchangeMatrix b, int k, int depth)
+        protected override Fingerprint Exchange(int[] ids, int[] b, int k, int depth)
         {
             ulong plusA = 1, plusB = 1, minusA = 1, minusB = 1;
-            int n = ids.Length, rows = b.RowCount;
+            int n = ids.Length, rows = b.Length / n;
             for (int i = 0; i < rows; i++)
             {
-                int e = b.At(i, k);
+                int e = b[i * n + k];
                 if (e == 0) continue;
                 var v = i < n ? Values[ids[i]] : frozen[i - n];
                 if (e > 0)
@@ -191,10 +191,10 @@ public static class ExchangeGraph
     {
         public IReadOnlyList<T> FoundValues => Values;
 
-        protected override T Exchange(int[] ids, ExchangeMatrix b, int k, int depth)
+        protected override T Exchange(int[] ids, int[] b, int k, int depth)
         {
             int n = ids.Length;
-            var rhs = RingPower.ExchangeSum(ring, b, k, i => i < n ? Values[ids[i]] : frozen[i - n]);
+            var rhs = RingPower.ExchangeSum(ring, b, n, k, i => i < n ? Values[ids[i]] : frozen[i - n]);
             var xk = Values[ids[k]];
             if (!ring.TryDivide(rhs, xk, out var q))
                 throw new ExchangeDivisionException(k + 1, depth,

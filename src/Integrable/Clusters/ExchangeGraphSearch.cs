@@ -2,13 +2,20 @@ using System.Runtime.CompilerServices;
 
 namespace Integrable.Clusters;
 
-/// <summary>Breadth-first search over seeds, shared by the fingerprint and the exact explorations.
-/// Cluster variables are interned (each distinct value gets an id); a seed is stored as the ids at its
-/// n mutable positions plus its exchange matrix, and keyed by the sorted ids (its cluster as a set).</summary>
+/// <summary>Breadth-first search over seeds, shared by the fingerprint and the exact explorations.</summary>
+/// <remarks>
+/// Cluster variables are interned: each distinct value gets an id. Seed s is stored in flat buffers as
+/// the ids at its n mutable positions, the same ids sorted (its cluster as a set, the search key), and
+/// its row-major (n + m)×n exchange matrix. Seeds are numbered in the order they are found, which is
+/// breadth-first order, so the queue is just a cursor. Lookups of a candidate cluster go through an
+/// alternate span key and allocate nothing; only new seeds write to the buffers.
+/// </remarks>
 /// <typeparam name="T">The value type of a cluster variable.</typeparam>
 internal abstract class ExchangeGraphSearch<T> where T : notnull
 {
     private readonly Dictionary<T, int> _ids;
+    private int _n, _cells, _count;
+    private int[] _idBuf = [], _keyBuf = [], _matBuf = [], _hash = [], _depth = [], _parentDirection = [];
 
     protected ExchangeGraphSearch(IEqualityComparer<T>? comparer) => _ids = new Dictionary<T, int>(comparer);
 
@@ -18,9 +25,15 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
     /// <summary>Hook called when a value is given an id (e.g. to cache its inverse).</summary>
     protected virtual void OnRegistered(int id, T value) { }
 
-    /// <summary>The new variable of μ_k (0-based k) of the seed with cluster ids <paramref name="ids"/>
-    /// and matrix <paramref name="b"/>; <paramref name="depth"/> is the depth of the new seed.</summary>
-    protected abstract T Exchange(int[] ids, ExchangeMatrix b, int k, int depth);
+    /// <summary>The new variable of μ_k (0-based k) of the seed whose mutable positions hold the ids
+    /// <paramref name="ids"/> and whose row-major matrix is <paramref name="b"/>; <paramref name="depth"/>
+    /// is the depth of the new seed.</summary>
+    protected abstract T Exchange(int[] ids, int[] b, int k, int depth);
+
+    /// <summary>Thrown when the new variable of a mutation has the same value as a variable of the seed
+    /// it comes from, so values cannot identify the variables (a degenerate evaluation point).</summary>
+    internal sealed class DegenerateValuesException(int direction, int depth)
+        : Exception($"the mutation in direction {direction} at depth {depth} gives a value already present in the seed");
 
     private int Register(T value)
     {
@@ -37,105 +50,117 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
         IReadOnlyList<T> initialCluster, ExchangeMatrix matrix, ExplorationOptions options,
         IProgress<ExplorationProgress>? progress, CancellationToken cancellationToken)
     {
-        int n = matrix.MutableCount;
-        var first = new int[n];
+        int n = _n = matrix.MutableCount;
+        int cells = _cells = matrix.RowCount * n;
+        var ids = new int[n];           // the seed being expanded: ids, sorted ids, matrix
+        var sorted = new int[n];
+        var b = new int[cells];
+        var key = new int[n];           // candidate cluster, sorted
         for (int i = 0; i < n; i++)
         {
-            if (_ids.ContainsKey(initialCluster[i]))
+            if (_ids.TryGetValue(initialCluster[i], out int same))
                 throw new ArgumentException(
-                    $"initial cluster variables x_{_ids[initialCluster[i]] + 1} and x_{i + 1} are equal, so they cannot be told apart");
-            first[i] = Register(initialCluster[i]);
+                    $"initial cluster variables x_{same + 1} and x_{i + 1} are equal, so they cannot be told apart");
+            ids[i] = Register(initialCluster[i]);
         }
-
-        var seedIds = new List<int[]> { first };          // ids at the n mutable positions
-        var seedKeys = new List<int[]> { Sorted(first) };  // the same ids sorted: the cluster as a set
-        var seedMatrix = new List<ExchangeMatrix> { matrix };
-        var seedDepth = new List<int> { 0 };
-        var seedParentDirection = new List<int> { -1 };
-        var index = new Dictionary<int[], int>(ClusterComparer.Instance) { [seedKeys[0]] = 0 };
+        ids.CopyTo(key, 0);
+        Array.Sort(key);
+        var comparer = new SeedComparer(this);
+        var index = new HashSet<int>(comparer);
         var lookup = index.GetAlternateLookup<ReadOnlySpan<int>>();
-        Span<int> key = n <= 256 ? stackalloc int[n] : new int[n];
-        var queue = new Queue<int>();
-        queue.Enqueue(0);
+        Append(ids, key, matrix.Entries, 0, 0);
+        index.Add(0);
+
         int maxDepth = 0;
         bool complete = true;
         int nextReport = 1024;
-
-        while (queue.Count > 0 && complete)
+        int current = 0;
+        for (; current < _count && complete; current++)
         {
             cancellationToken.ThrowIfCancellationRequested();
-            int s = queue.Dequeue();
-            var ids = seedIds[s];
-            var sortedIds = seedKeys[s];
-            var b = seedMatrix[s];
-            int depth = seedDepth[s] + 1;
+            int s = current;
+            _idBuf.AsSpan(s * n, n).CopyTo(ids);
+            _keyBuf.AsSpan(s * n, n).CopyTo(sorted);
+            _matBuf.AsSpan(s * cells, cells).CopyTo(b);
+            int depth = _depth[s] + 1, parentDirection = _parentDirection[s];
             for (int k = 0; k < n; k++)
             {
-                if (k == seedParentDirection[s]) continue;   // μ_k is an involution: that edge leads back
+                if (k == parentDirection) continue;   // μ_k is an involution: that edge leads back
                 T value = Exchange(ids, b, k, depth);
-                if (_ids.TryGetValue(value, out int id))
+                bool known = _ids.TryGetValue(value, out int id);
+                if (known)
                 {
                     if (Array.IndexOf(ids, id) >= 0) throw new DegenerateValuesException(k + 1, depth);
-                    Replace(sortedIds, ids[k], id, key);
+                    Replace(sorted, ids[k], id, key);
                     if (lookup.TryGetValue(key, out int t))
                     {
                         // Seeds are expanded in index order. If t < s, t was expanded already and the same edge was
                         // checked from its side (or created s); μ_k is an involution, so one check per edge suffices.
-                        if (t > s) Verify(ids, k, id, b, seedIds[t], seedMatrix[t]);
+                        if (t > s) Verify(ids, k, id, b, t);
                         continue;
                     }
                 }
                 // A new seed.
-                if (seedIds.Count >= options.MaxSeeds)
+                if (_count >= options.MaxSeeds)
                 {
                     complete = false;
                     break;
                 }
-                int newId = id;
-                if (!_ids.ContainsKey(value))
+                if (!known)
                 {
-                    newId = Register(value);
-                    Replace(sortedIds, ids[k], newId, key);
+                    id = Register(value);
+                    Replace(sorted, ids[k], id, key);
                 }
-                var newIds = (int[])ids.Clone();
-                newIds[k] = newId;
-                var newKey = key.ToArray();
-                index.Add(newKey, seedIds.Count);
-                queue.Enqueue(seedIds.Count);
-                seedIds.Add(newIds);
-                seedKeys.Add(newKey);
-                seedMatrix.Add(b.MutateAt(k));
-                seedDepth.Add(depth);
-                seedParentDirection.Add(k);
+                int old = ids[k];
+                ids[k] = id;
+                index.Add(Append(ids, key, b, k, depth));
+                ids[k] = old;
                 maxDepth = Math.Max(maxDepth, depth);
-                if (progress is not null && seedIds.Count >= nextReport)
+                if (progress is not null && _count >= nextReport)
                 {
                     nextReport *= 2;
-                    progress.Report(new ExplorationProgress(seedIds.Count, Values.Count, queue.Count, maxDepth));
+                    progress.Report(new ExplorationProgress(_count, Values.Count, _count - s - 1, maxDepth));
                 }
             }
         }
-        progress?.Report(new ExplorationProgress(seedIds.Count, Values.Count, queue.Count, maxDepth));
-        return (seedIds.Count, Values.Count, complete, maxDepth);
+        // When stopped early, the seed being expanded (current − 1 after the loop's increment) and all later
+        // ones still have unexamined neighbours.
+        int pending = complete ? 0 : _count - (current - 1);
+        progress?.Report(new ExplorationProgress(_count, Values.Count, pending, maxDepth));
+        return (_count, Values.Count, complete, maxDepth);
     }
 
-    /// <summary>Thrown when the new variable of a mutation has the same value as a variable of the seed
-    /// it comes from, so values cannot identify the variables (a degenerate evaluation point).</summary>
-    internal sealed class DegenerateValuesException(int direction, int depth)
-        : Exception($"the mutation in direction {direction} at depth {depth} gives a value already present in the seed")
+    /// <summary>Appends a seed with the given ids and sorted ids, whose matrix is μ_k of
+    /// <paramref name="parentMatrix"/> (or <paramref name="parentMatrix"/> itself when
+    /// <paramref name="depth"/> is 0), and returns its index.</summary>
+    private int Append(int[] ids, int[] key, ReadOnlySpan<int> parentMatrix, int k, int depth)
     {
-    }
-
-    private static int[] Sorted(int[] ids)
-    {
-        var s = (int[])ids.Clone();
-        Array.Sort(s);
+        int n = _n, cells = _cells, s = _count;
+        if (s == _depth.Length)
+        {
+            int capacity = Math.Max(16, 2 * s);
+            Array.Resize(ref _idBuf, capacity * n);
+            Array.Resize(ref _keyBuf, capacity * n);
+            Array.Resize(ref _matBuf, capacity * cells);
+            Array.Resize(ref _hash, capacity);
+            Array.Resize(ref _depth, capacity);
+            Array.Resize(ref _parentDirection, capacity);
+        }
+        ids.CopyTo(_idBuf.AsSpan(s * n, n));
+        key.CopyTo(_keyBuf.AsSpan(s * n, n));
+        var dst = _matBuf.AsSpan(s * cells, cells);
+        if (depth == 0) parentMatrix.CopyTo(dst);
+        else ExchangeMatrix.MutateInto(parentMatrix, dst, n, cells / n, k);
+        _hash[s] = Hash(key);
+        _depth[s] = depth;
+        _parentDirection[s] = depth == 0 ? -1 : k;
+        _count = s + 1;
         return s;
     }
 
     /// <summary>Writes the sorted ids <paramref name="sorted"/> with <paramref name="oldId"/> replaced by
     /// <paramref name="newId"/> into <paramref name="result"/>, keeping it sorted.</summary>
-    private static void Replace(int[] sorted, int oldId, int newId, Span<int> result)
+    private static void Replace(int[] sorted, int oldId, int newId, int[] result)
     {
         int w = 0;
         bool placed = false;
@@ -149,47 +174,52 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
     }
 
     /// <summary>Checks that a seed reached again — μ_k of the seed (<paramref name="ids"/>,
-    /// <paramref name="parent"/>), whose new variable has id <paramref name="newId"/> — has the recorded
-    /// matrix up to the relabelling that matches the clusters.</summary>
+    /// <paramref name="parent"/>), whose new variable has id <paramref name="newId"/> — has the matrix
+    /// recorded for seed <paramref name="t"/> up to the relabelling that matches the clusters.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void Verify(int[] ids, int k, int newId, ExchangeMatrix parent, int[] recordedIds, ExchangeMatrix recorded)
+    private void Verify(int[] ids, int k, int newId, int[] parent, int t)
     {
-        int n = ids.Length;
+        int n = _n, rows = _cells / n;
+        var recordedIds = _idBuf.AsSpan(t * n, n);
+        var recorded = _matBuf.AsSpan(t * _cells, _cells);
         Span<int> pi = n <= 256 ? stackalloc int[n] : new int[n];
         for (int i = 0; i < n; i++)
-            pi[i] = Array.IndexOf(recordedIds, i == k ? newId : ids[i]);
-        for (int i = 0; i < parent.RowCount; i++)
+            pi[i] = recordedIds.IndexOf(i == k ? newId : ids[i]);
+        for (int i = 0; i < rows; i++)
         {
             int ri = i < n ? pi[i] : i;
             for (int j = 0; j < n; j++)
-                if (parent.MutatedEntry(k, i, j) != recorded.At(ri, pi[j]))
+                if (ExchangeMatrix.MutatedEntry(parent, n, k, i, j) != recorded[ri * n + pi[j]])
                     throw new InvalidOperationException(
                         "two seeds with the same cluster have exchange matrices that differ by more than the matching " +
-                        $"relabelling ({parent.MutateAt(k)} and {recorded}); either cluster variables collided in the fingerprints " +
-                        "(a negligible chance, see ExchangeGraph) or the seed is not determined by its cluster");
+                        "relabelling; either cluster variables collided in the fingerprints (a negligible chance, see " +
+                        "ExchangeGraph) or the seed is not determined by its cluster");
         }
     }
 
-    /// <summary>Equality of clusters given as sorted id arrays, with span lookups that allocate nothing.</summary>
-    private sealed class ClusterComparer : IEqualityComparer<int[]>, IAlternateEqualityComparer<ReadOnlySpan<int>, int[]>
+    private static int Hash(ReadOnlySpan<int> sortedIds)
     {
-        public static readonly ClusterComparer Instance = new();
+        var h = new HashCode();
+        foreach (int x in sortedIds) h.Add(x);
+        return h.ToHashCode();
+    }
 
-        public bool Equals(int[]? x, int[]? y) => x.AsSpan().SequenceEqual(y);
+    /// <summary>Seeds compared by their clusters (sorted ids in the key buffer), with span lookups.</summary>
+    private sealed class SeedComparer(ExchangeGraphSearch<T> search)
+        : IEqualityComparer<int>, IAlternateEqualityComparer<ReadOnlySpan<int>, int>
+    {
+        private ReadOnlySpan<int> Key(int s) => search._keyBuf.AsSpan(s * search._n, search._n);
 
-        public int GetHashCode(int[] obj) => Hash(obj);
+        public bool Equals(int x, int y) => x == y || Key(x).SequenceEqual(Key(y));
 
-        public bool Equals(ReadOnlySpan<int> alternate, int[] other) => alternate.SequenceEqual(other);
+        public int GetHashCode(int s) => search._hash[s];
+
+        public bool Equals(ReadOnlySpan<int> alternate, int other) => alternate.SequenceEqual(Key(other));
 
         public int GetHashCode(ReadOnlySpan<int> alternate) => Hash(alternate);
 
-        public int[] Create(ReadOnlySpan<int> alternate) => alternate.ToArray();
-
-        private static int Hash(ReadOnlySpan<int> ids)
-        {
-            var h = new HashCode();
-            foreach (int x in ids) h.Add(x);
-            return h.ToHashCode();
-        }
+        /// <summary>Seeds are added by index, never through the span key.</summary>
+        public int Create(ReadOnlySpan<int> alternate) =>
+            throw new InvalidOperationException("seeds are added to the index by number, not by cluster");
     }
 }

@@ -76,41 +76,51 @@ public sealed partial class ExchangeMatrix
     }
 
     /// <summary>μ_k with a 0-based, unchecked direction.</summary>
-    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
     internal ExchangeMatrix MutateAt(int k)
     {
-        int n = MutableCount, rows = RowCount;
-        var src = _b;
-        var dst = new int[src.Length];
-        int kOffset = k * n;
+        var dst = new int[_b.Length];
+        MutateInto(_b, dst, MutableCount, RowCount, k);
+        return new ExchangeMatrix(MutableCount, FrozenCount, dst, _d);
+    }
+
+    /// <summary>Kernel: writes μ_k of the row-major <paramref name="rows"/>×<paramref name="n"/> matrix
+    /// <paramref name="src"/> into <paramref name="dst"/> (0-based k, unchecked; the spans must not overlap).</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
+    internal static void MutateInto(ReadOnlySpan<int> src, Span<int> dst, int n, int rows, int k)
+    {
+        var rowK = src.Slice(k * n, n);
         for (int i = 0; i < rows; i++)
         {
-            int rowOffset = i * n;
-            int bik = src[rowOffset + k];
+            var row = src.Slice(i * n, n);
+            var outRow = dst.Slice(i * n, n);
+            int bik = row[k];
             if (i == k)
             {
-                for (int j = 0; j < n; j++) dst[rowOffset + j] = -src[rowOffset + j];
+                for (int j = 0; j < n; j++) outRow[j] = -row[j];
                 continue;
             }
             if (bik == 0)
             {
                 // b'_ij = b_ij for j ≠ k, and b'_ik = −0 = 0.
-                Array.Copy(src, rowOffset, dst, rowOffset, n);
+                row.CopyTo(outRow);
                 continue;
             }
             for (int j = 0; j < n; j++)
-                dst[rowOffset + j] = j == k ? -bik : Mutated(src[rowOffset + j], bik, src[kOffset + j], i, j, k);
+                outRow[j] = Mutated(row[j], bik, rowK[j], i, j, k);
+            outRow[k] = -bik;
         }
-        return new ExchangeMatrix(n, FrozenCount, dst, _d);
     }
 
     /// <summary>Entry (0-based <paramref name="i"/>, <paramref name="j"/>) of μ_k(B̃) without building it.</summary>
-    internal int MutatedEntry(int k, int i, int j)
+    internal int MutatedEntry(int k, int i, int j) => MutatedEntry(_b, MutableCount, k, i, j);
+
+    /// <summary>Kernel: entry (i, j) of μ_k of the row-major matrix <paramref name="b"/> with <paramref name="n"/> columns.</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    internal static int MutatedEntry(ReadOnlySpan<int> b, int n, int k, int i, int j)
     {
-        int n = MutableCount;
-        int bij = _b[i * n + j];
+        int bij = b[i * n + j];
         if (i == k || j == k) return -bij;
-        return Mutated(bij, _b[i * n + k], _b[k * n + j], i, j, k);
+        return Mutated(bij, b[i * n + k], b[k * n + j], i, j, k);
     }
 
     /// <summary>b_ij + (|b_ik| b_kj + b_ik |b_kj|)/2 for i, j ≠ k, checked to fit in 32 bits (and not

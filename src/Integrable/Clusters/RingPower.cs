@@ -20,15 +20,16 @@ internal static class RingPower
     }
 
     /// <summary>The right-hand side Π x_i^[b_ik]₊ + Π x_i^[−b_ik]₊ of the exchange relation in the
-    /// 0-based direction <paramref name="k"/>, where x_i = <paramref name="variable"/>(i).</summary>
-    public static T ExchangeSum<T>(IRing<T> ring, ExchangeMatrix b, int k, Func<int, T> variable)
+    /// 0-based direction <paramref name="k"/> of the row-major matrix <paramref name="b"/> with
+    /// <paramref name="n"/> columns, where x_i = <paramref name="variable"/>(i).</summary>
+    public static T ExchangeSum<T>(IRing<T> ring, ReadOnlySpan<int> b, int n, int k, Func<int, T> variable)
     {
-        int rows = b.RowCount;
+        int rows = b.Length / n;
         T plus = ring.One, minus = ring.One;
         bool plusSet = false, minusSet = false;
         for (int i = 0; i < rows; i++)
         {
-            int e = b.At(i, k);
+            int e = b[i * n + k];
             if (e == 0) continue;
             if (e > 0)
             {

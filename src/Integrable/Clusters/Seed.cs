@@ -148,7 +148,7 @@ public sealed class Seed<T> : IEquatable<Seed<T>>
     /// <summary>The new variable x_k' of μ_k without building the seed (0-based k, unchecked).</summary>
     internal T ExchangeAt(int k, int step)
     {
-        var rhs = RingPower.ExchangeSum(Ring, Matrix, k, i => _x[i]);
+        var rhs = RingPower.ExchangeSum(Ring, Matrix.Entries, MutableCount, k, i => _x[i]);
         if (!Ring.TryDivide(rhs, _x[k], out var q))
             throw new ExchangeDivisionException(k + 1, step,
                 Ring.IsZero(_x[k]) ? $"x_{k + 1} is zero" : $"x_{k + 1} = {_x[k]} does not divide {rhs}");

@@ -5,8 +5,10 @@ namespace Integrable.Series;
 /// <remarks>
 /// <para>F is a delegate over series of one ring: it receives y (with x available as
 /// <see cref="PowerSeriesRing{T}.X"/>) and returns F(x, y). It must be built from the analytic series
-/// operations (+, −, ·, /, powers, composition with fixed series, exp/log, …) so that
-/// F(y + δ) = F(y) + ∂F/∂y(y)·δ + O(δ²), and it must not lose precision: an argument known to O(x^n) must
+/// operations applied to y itself (+, −, ·, /, powers, square roots, exp/log, composition of fixed
+/// series with y) so that F(y + δ) = F(y) + ∂F/∂y(y)·δ + O(δ²) with ∂F/∂y a series: Newton's method does
+/// not apply to equations in which y is differentiated or integrated or y(g) is formed (y = 1 + ∫y; use
+/// <see cref="Iterate{T}"/> for those, which only needs each step to gain a coefficient), and it must not lose precision: an argument known to O(x^n) must
 /// give a value known to at least O(x^n).</para>
 /// <para><b>Newton.</b> From an approximation correct to O(x^m), one step gives O(x^{2m}):
 /// y ← y − (y − F(y))·u where u = (1 − ∂F/∂y(y))⁻¹ mod x^m is carried from step to step and refined by one
@@ -31,7 +33,7 @@ public static class SeriesEquations
     /// <param name="order">The precision wanted, non-negative.</param>
     /// <param name="derivative">Optional y ↦ ∂F/∂y(x, y); when null it is computed by the dual-number trick (see remarks).</param>
     /// <param name="initial">Optional approximation whose correct leading terms start the iteration; when null,
-    /// y(0) is taken from F(x, O(x)), which works when F(0, y) does not depend on y.</param>
+    /// y(0) is taken from F(x, O(1)), which works when F(0, y) does not depend on y.</param>
     /// <returns>The verified solution, with precision <paramref name="order"/>.</returns>
     /// <exception cref="ArgumentException">No usable start (y(0) undetermined or wrong), 1 − ∂F/∂y(0, y(0)) = 0, or F loses precision.</exception>
     /// <exception cref="InvalidOperationException">The iteration or the final check failed (F is not analytic in y, or the supplied derivative is wrong).</exception>
@@ -145,7 +147,7 @@ public static class SeriesEquations
         PowerSeries<T> y;
         if (initial is null)
         {
-            var z = f(ring.O(1));
+            var z = f(ring.O(0));
             if (z.Precision < 1)
                 throw new ArgumentException("F(0, y) depends on y(0), so y(0) is not determined by F alone: supply an initial approximation", nameof(initial));
             y = z.Truncate(1);

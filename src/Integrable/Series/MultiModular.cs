@@ -108,7 +108,9 @@ internal sealed class CrtBasis
 
     private readonly int _k;
     private readonly ulong[] _p;
-    private readonly ulong[][] _pm, _pmShoup;      // [i][j] = p_j mod p_i (j < i)
+    private readonly ulong[][] _prefixMod;         // [i][j] = p_0…p_{j−1} mod p_i (j < i)
+    private readonly ulong[] _t64, _t128;          // 2^64, 2^128 mod p_i
+    private readonly Numbers.PrimeField[] _fields;
     private readonly ulong[] _inv, _invShoup;      // (p_0…p_{i−1})^{-1} mod p_i
     private readonly ulong[][] _prefixLimbs;       // [c] = limbs of p_0…p_{c−1}
 
@@ -118,18 +120,22 @@ internal sealed class CrtBasis
         _p = new ulong[k];
         var primes = new NttPrime[k];
         for (int i = 0; i < k; i++) { primes[i] = NttPrime.Get(i); _p[i] = primes[i].P; }
-        _pm = new ulong[k][]; _pmShoup = new ulong[k][];
+        _prefixMod = new ulong[k][];
         _inv = new ulong[k]; _invShoup = new ulong[k];
+        _t64 = new ulong[k]; _t128 = new ulong[k];
+        _fields = new Numbers.PrimeField[k];
         for (int i = 0; i < k; i++)
         {
             var f = primes[i].Field;
-            _pm[i] = new ulong[i]; _pmShoup[i] = new ulong[i];
+            _fields[i] = f;
+            _t64[i] = (ulong)((UInt128.One << 64) % _p[i]);
+            _t128[i] = f.Multiply(_t64[i], _t64[i]);
+            _prefixMod[i] = new ulong[i];
             ulong prefix = 1 % _p[i];
             for (int j = 0; j < i; j++)
             {
-                ulong r = _p[j] % _p[i];
-                _pm[i][j] = r; _pmShoup[i][j] = primes[i].ShoupOf(r);
-                prefix = f.Multiply(prefix, r);
+                _prefixMod[i][j] = prefix;                  // p_0…p_{j−1} mod p_i
+                prefix = f.Multiply(prefix, _p[j] % _p[i]);
             }
             _inv[i] = i == 0 ? 1 : f.Inverse(prefix);
             _invShoup[i] = primes[i].ShoupOf(_inv[i]);
@@ -177,18 +183,19 @@ internal sealed class CrtBasis
         v[0] = residues[0];
         for (int i = 1; i < c; i++)
         {
+            // s = Σ_{j<i} v_j·(p_0…p_{j−1}) mod p_i, accumulated in 192 bits and reduced once.
             ulong pi = _p[i];
-            var pm = _pm[i]; var pms = _pmShoup[i];
-            ulong s = v[i - 1];
-            if (s >= pi) s -= pi;
-            for (int j = i - 2; j >= 0; j--)
+            var pm = _prefixMod[i];
+            ulong lo = 0, mid = 0, top = 0;
+            for (int j = 0; j < i; j++)
             {
-                s = NttPrime.MulShoup(s, pm[j], pms[j], pi);
-                ulong vj = v[j];
-                if (vj >= pi) vj -= pi;
-                s += vj;
-                if (s >= pi) s -= pi;
+                ulong hi = Math.BigMul(v[j], pm[j], out ulong plo);
+                lo += plo;
+                hi += lo < plo ? 1UL : 0UL;
+                mid += hi;
+                if (mid < hi) top++;
             }
+            ulong s = IntegerVector.Combine(lo, mid, top, _fields[i], _t64[i], _t128[i]);
             ulong d = residues[i] >= s ? residues[i] - s : residues[i] + pi - s;
             v[i] = NttPrime.MulShoup(d, _inv[i], _invShoup[i], pi);
         }

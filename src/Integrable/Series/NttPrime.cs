@@ -121,9 +121,11 @@ internal sealed class NttPrime
         var t = GetTables(log);
         ulong p = P, p2 = 2 * p;
         int n = 1 << log;
-        ulong[] w = t.W, ws = t.WShoup;
-        for (int len = n >> 1; len >= 1; len >>= 1)
+        a = a[..n];
+        for (int len = n >> 1; len >= 4; len >>= 1)
         {
+            var wl = new ReadOnlySpan<ulong>(t.W, len, len);
+            var wsl = new ReadOnlySpan<ulong>(t.WShoup, len, len);
             for (int start = 0; start < n; start += 2 * len)
             {
                 var lo = a.Slice(start, len);
@@ -133,9 +135,32 @@ internal sealed class NttPrime
                     ulong u = lo[j], v = hi[j];
                     ulong s = u + v;
                     lo[j] = s >= p2 ? s - p2 : s;
-                    hi[j] = MulShoupLazy(u - v + p2, w[len + j], ws[len + j], p);
+                    hi[j] = MulShoupLazy(u - v + p2, wl[j], wsl[j], p);
                 }
             }
+        }
+        if (n >= 4)
+        {
+            ulong w1 = t.W[3], w1s = t.WShoup[3];    // ω_4 (W[2] = 1)
+            for (int s0 = 0; s0 + 3 < a.Length; s0 += 4)
+            {
+                ulong u0 = a[s0], u1 = a[s0 + 1], v0 = a[s0 + 2], v1 = a[s0 + 3];
+                ulong x0 = u0 + v0; if (x0 >= p2) x0 -= p2;
+                ulong x1 = u1 + v1; if (x1 >= p2) x1 -= p2;
+                ulong y0 = u0 - v0 + p2; if (y0 >= p2) y0 -= p2;
+                ulong y1 = MulShoupLazy(u1 - v1 + p2, w1, w1s, p);
+                // len = 1 stage on (x0, x1) and (y0, y1); ω_2^0 = 1.
+                ulong s = x0 + x1; a[s0] = s >= p2 ? s - p2 : s;
+                ulong d = x0 - x1 + p2; a[s0 + 1] = d >= p2 ? d - p2 : d;
+                s = y0 + y1; a[s0 + 2] = s >= p2 ? s - p2 : s;
+                d = y0 - y1 + p2; a[s0 + 3] = d >= p2 ? d - p2 : d;
+            }
+        }
+        else if (n == 2)
+        {
+            ulong u = a[0], v = a[1];
+            ulong s = u + v; a[0] = s >= p2 ? s - p2 : s;
+            ulong d = u - v + p2; a[1] = d >= p2 ? d - p2 : d;
         }
     }
 
@@ -146,9 +171,42 @@ internal sealed class NttPrime
         var t = GetTables(log);
         ulong p = P, p2 = 2 * p;
         int n = 1 << log;
-        ulong[] w = t.IW, ws = t.IWShoup;
-        for (int len = 1; len < n; len <<= 1)
+        a = a[..n];
+        if (n >= 4)
         {
+            ulong w1 = t.IW[3], w1s = t.IWShoup[3];
+            for (int s0 = 0; s0 + 3 < a.Length; s0 += 4)
+            {
+                ulong a0 = a[s0], a1 = a[s0 + 1], a2 = a[s0 + 2], a3 = a[s0 + 3];
+                if (a0 >= p2) a0 -= p2;
+                if (a1 >= p2) a1 -= p2;
+                if (a2 >= p2) a2 -= p2;
+                if (a3 >= p2) a3 -= p2;
+                // len = 1: (a0, a1) and (a2, a3), outputs in [0, 2p) after one correction.
+                ulong x0 = a0 + a1; if (x0 >= p2) x0 -= p2;
+                ulong x1 = a0 - a1 + p2; if (x1 >= p2) x1 -= p2;
+                ulong y0 = a2 + a3; if (y0 >= p2) y0 -= p2;
+                ulong y1 = a2 - a3 + p2; if (y1 >= p2) y1 -= p2;
+                // len = 2 with twiddles 1 and ω_4^{-1}; outputs in [0, 4p).
+                a[s0] = x0 + y0;
+                a[s0 + 2] = x0 - y0 + p2;
+                ulong v = MulShoupLazy(y1, w1, w1s, p);
+                a[s0 + 1] = x1 + v;
+                a[s0 + 3] = x1 - v + p2;
+            }
+        }
+        else if (n == 2)
+        {
+            ulong u = a[0], v = a[1];
+            if (u >= p2) u -= p2;
+            if (v >= p2) v -= p2;
+            a[0] = u + v;
+            a[1] = u - v + p2;
+        }
+        for (int len = 4; len < n; len <<= 1)
+        {
+            var wl = new ReadOnlySpan<ulong>(t.IW, len, len);
+            var wsl = new ReadOnlySpan<ulong>(t.IWShoup, len, len);
             for (int start = 0; start < n; start += 2 * len)
             {
                 var lo = a.Slice(start, len);
@@ -157,14 +215,14 @@ internal sealed class NttPrime
                 {
                     ulong u = lo[j];
                     if (u >= p2) u -= p2;
-                    ulong v = MulShoupLazy(hi[j], w[len + j], ws[len + j], p);
+                    ulong v = MulShoupLazy(hi[j], wl[j], wsl[j], p);
                     lo[j] = u + v;
                     hi[j] = u - v + p2;
                 }
             }
         }
         ulong ninv = Field.Inverse((ulong)n % p), ninvS = ShoupOf(ninv);
-        for (int i = 0; i < n; i++) a[i] = MulShoup(a[i], ninv, ninvS, p);
+        for (int i = 0; i < a.Length; i++) a[i] = MulShoup(a[i], ninv, ninvS, p);
     }
 
     /// <summary>Pointwise product a[i] ← a[i]·b[i] mod p, inputs in [0, 2p), output in [0, p).</summary>

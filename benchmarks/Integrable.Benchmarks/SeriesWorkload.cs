@@ -25,8 +25,8 @@ public sealed class SeriesWorkload : IWorkload
         double seconds = Timing.Median(5, () =>
         {
             c = dual
-                ? SeriesEquations.SolveNewton(ring, y => 1 + x * y * y, n)
-                : SeriesEquations.SolveNewton(ring, y => 1 + x * y * y, n, derivative: y => 2 * x * y);
+                ? SeriesEquations.SolveNewton(ring, y => 1 + x * (y * y), n)
+                : SeriesEquations.SolveNewton(ring, y => 1 + x * (y * y), n, derivative: y => 2 * x * y);
         });
         var last = c![n - 1].Numerator;
         int digits = System.Numerics.BigInteger.Abs(last).ToString(CultureInfo.InvariantCulture).Length;

@@ -1,6 +1,9 @@
 namespace Integrable.Guessing;
 
 /// <summary>Defaults shared by the guessing procedures.</summary>
+/// <example><code>
+/// var g = BerlekampMassey.Find(terms, minimumConfirmations: GuessDefaults.MinimumConfirmations + 5);
+/// </code></example>
 public static class GuessDefaults
 {
     /// <summary>The number of extra terms that must confirm a guess, beyond the terms that determined it,

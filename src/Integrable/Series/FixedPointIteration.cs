@@ -6,6 +6,11 @@ namespace Integrable.Series;
 /// <remarks>The iteration counts as converging x-adically when the valuations of the successive changes
 /// y_{k+1} − y_k strictly increase (each step fixes at least one more coefficient); it stops when a change
 /// vanishes modulo x^order, and then <see cref="Solution"/> satisfies y = F(x, y) modulo x^order exactly.</remarks>
+/// <example><code>
+/// var r = PowerSeriesRing.Rationals;
+/// var it = SeriesEquations.Iterate(r, y => 1 + r.X * y * y, 20);
+/// if (it.Converged) Console.WriteLine(it.Solution);   // Catalan numbers
+/// </code></example>
 public sealed class FixedPointIteration<T>
 {
     internal FixedPointIteration(bool converged, PowerSeries<T> last, int steps, IReadOnlyList<int> changeValuations, string explanation)

@@ -27,24 +27,33 @@ internal static class MultiModular
         var counts = PrimeCounts(a, b, m, out int kMax);
         var result = new BigInteger[m];
         if (kMax == 0) return result;
-        var residues = new ulong[m * kMax];
+        // One image per prime (kept per prime so no array reaches the large-object heap), then one
+        // reconstruction per coefficient from the prefix of primes its bound needs.
+        var images = new ulong[kMax][];
         var ra = new ulong[Math.Min(la, m)];
         var rb = square ? ra : new ulong[Math.Min(lb, m)];
-        var prod = new ulong[m];
-        var aView = a; var bView = b;
+        int full = ra.Length + rb.Length - 1;
+        int log = full <= 1 ? 0 : BitOperations.Log2((uint)(full - 1)) + 1;
+        var fa = new ulong[1 << log];
+        var fb = square ? fa : new ulong[1 << log];
         for (int j = 0; j < kMax; j++)
         {
             var prime = NttPrime.Get(j);
-            ReduceTruncated(aView, prime, ra);
-            if (!square) ReduceTruncated(bView, prime, rb);
-            prime.Multiply(ra, rb, prod, square);
-            for (int k = 0; k < m; k++) residues[k * kMax + j] = prod[k];
+            ReduceTruncated(a, prime, ra);
+            if (!square) ReduceTruncated(b, prime, rb);
+            images[j] = new ulong[m];
+            prime.Multiply(ra, rb, images[j], square, fa, fb);
         }
         var basis = CrtBasis.Get(kMax);
         var scratch = new ulong[kMax + 2];
         var digits = new ulong[kMax];
+        var residues = new ulong[kMax];
         for (int k = 0; k < m; k++)
-            result[k] = basis.Reconstruct(residues.AsSpan(k * kMax, counts[k]), digits, scratch);
+        {
+            int c = counts[k];
+            for (int j = 0; j < c; j++) residues[j] = images[j][k];
+            result[k] = basis.Reconstruct(residues.AsSpan(0, c), digits, scratch);
+        }
         return result;
     }
 

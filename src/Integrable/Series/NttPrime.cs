@@ -258,9 +258,18 @@ internal sealed class NttPrime
     {
         int full = a.Length + b.Length - 1;
         int log = full <= 1 ? 0 : BitOperations.Log2((uint)(full - 1)) + 1;
-        int n = 1 << log;
-        var fa = new ulong[n];
+        var fa = new ulong[1 << log];
+        Multiply(a, b, result, square, fa, square ? fa : new ulong[1 << log]);
+    }
+
+    /// <summary>As <see cref="Multiply(ReadOnlySpan{ulong}, ReadOnlySpan{ulong}, Span{ulong}, bool)"/> with caller-supplied
+    /// scratch arrays of the transform length 2^⌈log₂(a.Length + b.Length − 1)⌉ (the same array twice when squaring).</summary>
+    public void Multiply(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> result, bool square, ulong[] fa, ulong[] fb)
+    {
+        int n = fa.Length;
+        int log = BitOperations.Log2((uint)n);
         a.CopyTo(fa);
+        fa.AsSpan(a.Length).Clear();
         Forward(fa, log);
         if (square)
         {
@@ -268,8 +277,8 @@ internal sealed class NttPrime
         }
         else
         {
-            var fb = new ulong[n];
             b.CopyTo(fb);
+            fb.AsSpan(b.Length).Clear();
             Forward(fb, log);
             PointwiseMultiply(fa, fb);
         }

@@ -20,6 +20,8 @@ internal abstract class CoefficientDomain<T>
     public bool AreEqual(T a, T b) => Ring.AreEqual(a, b);
     public T FromInteger(long v) => Ring.FromInteger(v);
     public abstract bool IsOne(T a);
+    /// <summary>Throws <see cref="ArgumentOutOfRangeException"/> when a is not a canonical element (a residue ≥ p).</summary>
+    public virtual void Validate(T a, string parameter) { }
     /// <summary>Multiplicative inverse; throws <see cref="DivideByZeroException"/> for zero.</summary>
     public abstract T Inverse(T a);
     /// <summary>a/k for a non-zero integer k; throws <see cref="ArithmeticException"/> when k is zero in the field.</summary>
@@ -74,6 +76,10 @@ internal sealed class ModularDomain(PrimeField field) : CoefficientDomain<ulong>
     public override IRing<ulong> Ring => Field;
     public override ulong Characteristic => Field.Modulus;
     public override bool IsOne(ulong a) => a == Field.One;
+    public override void Validate(ulong a, string parameter)
+    {
+        if (a >= Field.Modulus) throw new ArgumentOutOfRangeException(parameter, a, $"coefficients over {Field} must be residues in [0, {Field.Modulus})");
+    }
     public override ulong Inverse(ulong a) => Field.Inverse(a);
     public override ulong DivideByInteger(ulong a, long k)
     {

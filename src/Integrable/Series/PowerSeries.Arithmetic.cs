@@ -168,7 +168,7 @@ public sealed partial class PowerSeries<T>
     /// <param name="c">The scalar.</param>
     /// <returns><paramref name="a"/>/<paramref name="c"/>.</returns>
     /// <exception cref="DivideByZeroException"><paramref name="c"/> is zero.</exception>
-    public static PowerSeries<T> operator /(PowerSeries<T> a, T c) { ArgumentNullException.ThrowIfNull(a); return Scale(a, a.Ring.Domain.Inverse(c)); }
+    public static PowerSeries<T> operator /(PowerSeries<T> a, T c) { ArgumentNullException.ThrowIfNull(a); a.Ring.Domain.Validate(c, nameof(c)); return Scale(a, a.Ring.Domain.Inverse(c)); }
 
     /// <summary>Division by a scalar c: the scalar times the inverse of the series.</summary>
     /// <param name="c">The scalar.</param>
@@ -195,6 +195,7 @@ public sealed partial class PowerSeries<T>
     {
         ArgumentNullException.ThrowIfNull(a);
         var d = a.Ring.Domain;
+        d.Validate(c, nameof(c));
         if (d.IsZero(c)) return a.Ring.Zero;
         if (d.IsOne(c)) return a;
         var r = new T[a._c.Length];

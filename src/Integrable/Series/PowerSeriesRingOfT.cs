@@ -55,16 +55,22 @@ public sealed class PowerSeriesRing<T> : IEquatable<PowerSeriesRing<T>>
     /// <summary>The exact constant series <paramref name="value"/>.</summary>
     /// <param name="value">The constant.</param>
     /// <returns>The constant series.</returns>
-    public PowerSeries<T> Constant(T value) => PowerSeries<T>.Create(this, [value], PowerSeries<T>.ExactPrecision);
+    /// <exception cref="ArgumentOutOfRangeException">A residue not below p (over Z/pZ).</exception>
+    public PowerSeries<T> Constant(T value)
+    {
+        Domain.Validate(value, nameof(value));
+        return PowerSeries<T>.Create(this, [value], PowerSeries<T>.ExactPrecision);
+    }
 
     /// <summary>The exact monomial c·x^k.</summary>
     /// <param name="coefficient">The coefficient c.</param>
     /// <param name="exponent">The exponent k ≥ 0.</param>
     /// <returns>c·x^k.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="exponent"/> is negative.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="exponent"/> is negative, or a residue not below p.</exception>
     public PowerSeries<T> Monomial(T coefficient, int exponent)
     {
         ArgumentOutOfRangeException.ThrowIfNegative(exponent);
+        Domain.Validate(coefficient, nameof(coefficient));
         var c = new T[exponent + 1];
         Array.Fill(c, Domain.Zero);
         c[exponent] = coefficient;
@@ -74,17 +80,24 @@ public sealed class PowerSeriesRing<T> : IEquatable<PowerSeriesRing<T>>
     /// <summary>The exact polynomial c₀ + c₁x + … (infinite precision).</summary>
     /// <param name="coefficients">The coefficients, constant term first.</param>
     /// <returns>The polynomial as an exact series.</returns>
-    public PowerSeries<T> Polynomial(ReadOnlySpan<T> coefficients) => PowerSeries<T>.Create(this, coefficients.ToArray(), PowerSeries<T>.ExactPrecision);
+    /// <exception cref="ArgumentOutOfRangeException">A residue not below p (over Z/pZ).</exception>
+    public PowerSeries<T> Polynomial(ReadOnlySpan<T> coefficients) => PowerSeries<T>.Create(this, Checked(coefficients), PowerSeries<T>.ExactPrecision);
+
+    private T[] Checked(ReadOnlySpan<T> coefficients)
+    {
+        foreach (var c in coefficients) Domain.Validate(c, nameof(coefficients));
+        return coefficients.ToArray();
+    }
 
     /// <summary>The series c₀ + c₁x + … + O(x^precision); coefficients at index ≥ precision are dropped.</summary>
     /// <param name="coefficients">The known coefficients, constant term first (missing ones are zero).</param>
     /// <param name="precision">The precision n ≥ 0.</param>
     /// <returns>The series.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="precision"/> is negative.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="precision"/> is negative, or a residue not below p.</exception>
     public PowerSeries<T> Series(ReadOnlySpan<T> coefficients, int precision)
     {
         ArgumentOutOfRangeException.ThrowIfNegative(precision);
-        return PowerSeries<T>.Create(this, coefficients.ToArray(), precision);
+        return PowerSeries<T>.Create(this, Checked(coefficients), precision);
     }
 
     /// <summary>The series Σ_{k&lt;n} f(k) x^k + O(x^n).</summary>
@@ -97,7 +110,7 @@ public sealed class PowerSeriesRing<T> : IEquatable<PowerSeriesRing<T>>
         ArgumentNullException.ThrowIfNull(coefficient);
         ArgumentOutOfRangeException.ThrowIfNegative(precision);
         var c = new T[precision];
-        for (int k = 0; k < precision; k++) c[k] = coefficient(k);
+        for (int k = 0; k < precision; k++) { c[k] = coefficient(k); Domain.Validate(c[k], nameof(coefficient)); }
         return PowerSeries<T>.Create(this, c, precision);
     }
 

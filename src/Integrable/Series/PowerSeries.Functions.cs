@@ -204,6 +204,9 @@ public sealed partial class PowerSeries<T>
         return e.Truncate(n);
     }
 
+    /// <summary>Degree of the outer series from which composition uses baby steps / giant steps (settable from tests).</summary>
+    internal static int ComposeBabyStepThreshold = 8;
+
     private void CheckCharacteristic(int n, string what)
     {
         ulong ch = Ring.Domain.Characteristic;
@@ -211,7 +214,8 @@ public sealed partial class PowerSeries<T>
             throw new ArithmeticException($"the {what} to precision {n} divides by integers up to {n - 1}, which meets the characteristic {ch}");
     }
 
-    /// <summary>The composition this(g) with a series g of zero constant term (Horner's rule with truncated products).</summary>
+    /// <summary>The composition this(g) with a series g of zero constant term (Horner's rule for small degrees,
+    /// Brent–Kung baby steps / giant steps with about 2√n truncated products otherwise).</summary>
     /// <param name="inner">The inner series g, with known constant term 0.</param>
     /// <returns>f(g), with precision min(n_f·v_g, n_g + (w−1)·v_g) where w is the least k ≥ 1 with f_k ≠ 0.</returns>
     /// <exception cref="ArgumentException">The constant term of <paramref name="inner"/> is not known to be zero.</exception>
@@ -234,9 +238,40 @@ public sealed partial class PowerSeries<T>
         int deg = _c.Length - 1;
         if (prec != ExactPrecision) deg = Math.Min(deg, (prec - 1) / vg);
         var g = prec == ExactPrecision ? inner : inner.Truncate(prec);
-        var r = Ring.Constant(Get(deg));
-        for (int k = deg - 1; k >= 0; k--)
-            r = MultiplyCore(r, g, prec) + Ring.Constant(_c[k]);
+        PowerSeries<T> r;
+        if (deg < ComposeBabyStepThreshold)
+        {
+            r = Ring.Constant(Get(deg));
+            for (int k = deg - 1; k >= 0; k--)
+                r = MultiplyCore(r, g, prec) + Ring.Constant(_c[k]);
+        }
+        else
+        {
+            // Brent–Kung baby steps / giant steps: g^0 … g^s with s = ⌈√(deg+1)⌉, each block of s
+            // coefficients of f evaluated as a linear combination of those powers, blocks combined by
+            // Horner's rule in g^s: about 2√deg products instead of deg.
+            int step = (int)Math.Ceiling(Math.Sqrt(deg + 1));
+            var powers = new PowerSeries<T>[step + 1];
+            powers[0] = Ring.One;
+            for (int i = 1; i <= step; i++) powers[i] = MultiplyCore(powers[i - 1], g, prec);
+            int blocks = deg / step;
+            r = Block(blocks);
+            for (int j = blocks - 1; j >= 0; j--)
+                r = MultiplyCore(r, powers[step], prec) + Block(j);
+
+            PowerSeries<T> Block(int j)
+            {
+                var acc = Ring.Zero;
+                for (int i = 0; i < step; i++)
+                {
+                    int idx = j * step + i;
+                    if (idx > deg) break;
+                    var c = _c[idx];
+                    if (!d.IsZero(c)) acc += i == 0 ? Ring.Constant(c) : powers[i] * c;
+                }
+                return acc;
+            }
+        }
         return r.Truncate(prec);
     }
 }

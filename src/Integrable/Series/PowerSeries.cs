@@ -26,7 +26,8 @@ namespace Integrable.Series;
 /// <see cref="AgreesWith"/> to compare up to the smaller precision.</para>
 /// <para><b>Algorithms.</b> Products go through one kernel per coefficient field (multi-modular
 /// transforms over Q, three-prime transforms or schoolbook over Z/pZ); inverse, square root and
-/// exponential use Newton iteration (O(M(n)) each), the logarithm is ∫f′/f. In characteristic p,
+/// exponential use Newton iteration (O(M(n)) each), the logarithm is ∫f′/f, composition uses Brent–Kung
+/// baby steps / giant steps (about 2√n products plus n² scalar operations). In characteristic p,
 /// operations that divide by integers (integral, logarithm, exponential, square root for p = 2)
 /// throw <see cref="ArithmeticException"/> when they would divide by a multiple of p.</para>
 /// </remarks>

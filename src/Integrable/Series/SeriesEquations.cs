@@ -31,7 +31,8 @@ public static class SeriesEquations
     /// <param name="ring">The series ring.</param>
     /// <param name="f">The map y ↦ F(x, y).</param>
     /// <param name="order">The precision wanted, non-negative.</param>
-    /// <param name="derivative">Optional y ↦ ∂F/∂y(x, y); when null it is computed by the dual-number trick (see remarks).</param>
+    /// <param name="derivative">Optional y ↦ ∂F/∂y(x, y), called with y truncated to the precision the step needs (about half
+    /// the current order) and expected to return at least that precision; when null it is computed by the dual-number trick (see remarks).</param>
     /// <param name="initial">Optional approximation whose correct leading terms start the iteration; when null,
     /// y(0) is taken from F(x, O(1)), which works when F(0, y) does not depend on y.</param>
     /// <returns>The verified solution, with precision <paramref name="order"/>.</returns>

@@ -29,8 +29,13 @@ namespace Integrable.Kernels;
 /// </remarks>
 internal static partial class PolynomialMultiply
 {
-    /// <summary>Forces an algorithm (tests and benchmarks); <see cref="MultiplyAlgorithm.Auto"/> dispatches.</summary>
-    internal static MultiplyAlgorithm Force = MultiplyAlgorithm.Auto;
+    /// <summary>Forces an algorithm on the current thread (tests and benchmarks);
+    /// <see cref="MultiplyAlgorithm.Auto"/> (the default) dispatches.</summary>
+    [ThreadStatic] internal static MultiplyAlgorithm Force;
+
+    /// <summary>When positive, forces the dense method's window size to 2^value on the current
+    /// thread (tests use tiny windows to exercise the carries between windows).</summary>
+    [ThreadStatic] internal static int ForceDenseShift;
 
     /// <summary>Dense is chosen only when the degree box has at most this many cells per term product.</summary>
     internal static double DenseBoxPerProduct = 2.0;
@@ -87,7 +92,8 @@ internal static partial class PolynomialMultiply
         int count;
         TAcc[] acc;
         var algorithm = Choose(in s);
-        if (algorithm == MultiplyAlgorithm.Dense && s.Box < long.MaxValue / 2)
+        // Dense needs a window lookup table of Box / 2^shift entries: above DenseMaxBox use the heap even when forced.
+        if (algorithm == MultiplyAlgorithm.Dense && s.Box <= DenseMaxBox)
         {
             var stride = new long[n];
             long st = 1;
@@ -97,6 +103,7 @@ internal static partial class PolynomialMultiply
             int accBytes = Unsafe.SizeOf<TAcc>();
             int shift = 4;
             while (shift < 24 && (2L << (shift + 1)) * accBytes <= DenseBufferBytes && (1L << (shift + 1)) <= s.Box) shift++;
+            if (ForceDenseShift > 0) shift = ForceDenseShift;
             var oi = new long[Math.Max(ca.Length, cb.Length)];
             acc = new TAcc[oi.Length];
             count = MultiplyDense<TOps, TC, TAcc>(ia, ca, ib, cb, shift, ref oi, ref acc);

@@ -10,104 +10,116 @@ internal static partial class PolynomialMultiply
     /// the product's degree box, so the index of a product term is the sum of the indices of its
     /// factors (no carries between digits, since each digit of the sum stays below its radix).
     /// Descending lex order of exponents is descending index order.</para>
-    /// <para>The index space is cut into windows of L = 2^<paramref name="chunkShift"/> indices.
-    /// Terms are grouped by window (high part h = index >> shift). All pairs of groups (ga, gb) with
-    /// h_a + h_b = H add their products into a buffer of 2L accumulators that covers windows H and
-    /// H + 1; windows are processed in descending H, so when H is done the window H + 1 is final and
-    /// is emitted in descending order. Only that small buffer is written in the inner loop, so it
-    /// stays in the first-level cache; the full box is never allocated.</para>
+    /// <para>The index space is cut into windows of <paramref name="window"/> indices; terms are
+    /// grouped by window (high part h = index / window). All pairs of groups (ga, gb) with
+    /// h_a + h_b = H add their products into a small buffer, windows are processed in descending H and
+    /// each finished window is scanned in descending order (only over the range that was touched), so
+    /// only that buffer is written in the inner loop and it stays in cache; the full box is never
+    /// allocated. When <paramref name="aligned"/> is set, the window is the product of the radices of
+    /// the trailing variables, low parts never carry (la + lb &lt; window) and the buffer holds one
+    /// window. Otherwise low sums may spill into the next window: the buffer holds windows H and
+    /// H + 1, and window H + 1 is final once all pairs of sum H are done.</para>
     /// </remarks>
     /// <returns>Number of output terms written to <paramref name="oi"/> (indices, descending) and
     /// <paramref name="oc"/> (accumulators).</returns>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static int MultiplyDense<TOps, TC, TAcc>(
-        ReadOnlySpan<long> ia, ReadOnlySpan<TC> ca, ReadOnlySpan<long> ib, ReadOnlySpan<TC> cb, int chunkShift,
+        ReadOnlySpan<long> ia, ReadOnlySpan<TC> ca, ReadOnlySpan<long> ib, ReadOnlySpan<TC> cb, long window, bool aligned,
         ref long[] oi, ref TAcc[] oc)
         where TOps : ICoefficientOps<TC, TAcc>
     {
-        int L = 1 << chunkShift;
-        long lowMask = L - 1;
+        int L = checked((int)window);
         int na = ia.Length, nb = ib.Length;
 
-        // Groups of A: start offsets and high parts (descending).
-        CountGroups(ia, chunkShift, out var aStart, out var aHigh);
-        CountGroups(ib, chunkShift, out var bStart, out var bHigh);
+        CountGroups(ia, L, out var aStart, out var aHigh, out var la);
+        CountGroups(ib, L, out var bStart, out var bHigh, out var lb);
         int ga = aHigh.Length, gb = bHigh.Length;
         long minHB = bHigh[gb - 1], maxHB = bHigh[0];
         var bLookup = new int[checked((int)(maxHB - minHB + 1))];
         Array.Fill(bLookup, -1);
         for (int g = 0; g < gb; g++) bLookup[bHigh[g] - minHB] = g;
-
-        var la = new int[na];
-        for (int i = 0; i < na; i++) la[i] = (int)(ia[i] & lowMask);
-        var lb = new int[nb];
-        for (int i = 0; i < nb; i++) lb[i] = (int)(ib[i] & lowMask);
+        var caArr = ca.ToArray();
         var cbArr = cb.ToArray();
 
-        var buf = new TAcc[2 * L];
+        var buf = new TAcc[aligned ? L : 2 * L];
         long hMax = aHigh[0] + bHigh[0], hMin = aHigh[ga - 1] + bHigh[gb - 1];
         int count = 0;
-        bool carried = false;
-        int gLo = 0, gHi = 0; // window of A groups with hb in range: aHigh in [H - maxHB, H - minHB]
-        for (long H = hMax; H >= hMin - 1; H--)
+        // Touched ranges [lo, hi] of the two halves (empty when lo > hi).
+        int upLo = int.MaxValue, upHi = -1;
+        int gLo = 0, gHi = 0; // A groups whose partner high part lies in [minHB, maxHB]
+        for (long H = hMax; H >= hMin - (aligned ? 0 : 1); H--)
         {
-            bool upperDirty = carried, lowerDirty = false;
-            // A groups are in descending aHigh; advance gLo past groups with aHigh > H - minHB.
+            int lowLo = int.MaxValue, lowHi = -1;
             while (gLo < ga && aHigh[gLo] > H - minHB) gLo++;
             while (gHi < ga && aHigh[gHi] >= H - maxHB) gHi++;
             for (int g = gLo; g < gHi; g++)
             {
                 int bg = bLookup[H - aHigh[g] - minHB];
                 if (bg < 0) continue;
-                lowerDirty = upperDirty = true;
                 int b0 = bStart[bg], b1 = bStart[bg + 1];
-                ref TC cb0 = ref cbArr[b0];
-                ref int lb0 = ref lb[b0];
-                int len = b1 - b0;
-                for (int i = aStart[g], iEnd = aStart[g + 1]; i < iEnd; i++)
-                    TOps.MulAddRow(ref buf[la[i]], ca[i], ref cb0, ref lb0, len);
+                int a0 = aStart[g], a1 = aStart[g + 1];
+                // Lows are descending inside a group: first + first is the largest cell, last + last the smallest.
+                int top = la[a0] + lb[b0], bottom = la[a1 - 1] + lb[b1 - 1];
+                if (top > lowHi) lowHi = top;
+                if (bottom < lowLo) lowLo = bottom;
+                TOps.MulAddBlock(ref buf[0], ref caArr[a0], ref la[a0], a1 - a0, ref cbArr[b0], ref lb[b0], b1 - b0);
             }
-            if (upperDirty)
+            if (aligned)
             {
-                long baseIndex = H * L;
-                for (int k = 2 * L - 1; k >= L; k--)
-                {
-                    if (TOps.IsZero(in buf[k])) continue;
-                    if (count == oc.Length) Grow(ref oi, ref oc, count + 1);
-                    oi[count] = baseIndex + k;
-                    oc[count] = buf[k];
-                    count++;
-                    buf[k] = default!;
-                }
+                if (lowHi >= 0) Emit<TOps, TC, TAcc>(buf, lowLo, lowHi, H * (long)L, ref oi, ref oc, ref count);
+                continue;
             }
-            if (lowerDirty)
+            // Unaligned: cells [L, 2L) are window H + 1, now final.
+            if (lowHi >= L) { upHi = Math.Max(upHi, lowHi); upLo = Math.Min(upLo, Math.Max(lowLo, L)); }
+            if (upHi >= L) Emit<TOps, TC, TAcc>(buf, upLo, upHi, H * (long)L, ref oi, ref oc, ref count);
+            upLo = int.MaxValue; upHi = -1;
+            if (lowHi >= 0 && lowLo < L)
             {
-                Array.Copy(buf, 0, buf, L, L);
-                Array.Clear(buf, 0, L);
+                int from = lowLo, to = Math.Min(lowHi, L - 1);
+                Array.Copy(buf, from, buf, from + L, to - from + 1);
+                Array.Clear(buf, from, to - from + 1);
+                upLo = from + L; upHi = to + L;
             }
-            carried = lowerDirty;
         }
         return count;
     }
 
-    private static void CountGroups(ReadOnlySpan<long> idx, int shift, out int[] start, out long[] high)
+    /// <summary>Appends the non-zero cells buf[hi..lo] (descending) with index base + cell, and clears them.</summary>
+    private static void Emit<TOps, TC, TAcc>(TAcc[] buf, int lo, int hi, long baseIndex, ref long[] oi, ref TAcc[] oc, ref int count)
+        where TOps : ICoefficientOps<TC, TAcc>
     {
-        int groups = 0;
-        long prev = long.MinValue;
-        foreach (var x in idx)
+        for (int k = hi; k >= lo; k--)
         {
-            long h = x >> shift;
+            if (TOps.IsZero(in buf[k])) continue;
+            if (count == oc.Length) Grow(ref oi, ref oc, count + 1);
+            oi[count] = baseIndex + k;
+            oc[count] = buf[k];
+            count++;
+            buf[k] = default!;
+        }
+    }
+
+    private static void CountGroups(ReadOnlySpan<long> idx, int window, out int[] start, out long[] high, out int[] low)
+    {
+        int n = idx.Length, groups = 0;
+        low = new int[n];
+        var hs = new long[n];
+        long prev = long.MinValue;
+        for (int i = 0; i < n; i++)
+        {
+            long h = Math.DivRem(idx[i], window, out long r);
+            hs[i] = h;
+            low[i] = (int)r;
             if (h != prev) { groups++; prev = h; }
         }
         start = new int[groups + 1];
         high = new long[groups];
         int g = -1;
         prev = long.MinValue;
-        for (int i = 0; i < idx.Length; i++)
+        for (int i = 0; i < n; i++)
         {
-            long h = idx[i] >> shift;
-            if (h != prev) { g++; start[g] = i; high[g] = h; prev = h; }
+            if (hs[i] != prev) { g++; start[g] = i; high[g] = hs[i]; prev = hs[i]; }
         }
-        start[groups] = idx.Length;
+        start[groups] = n;
     }
 }

@@ -10,8 +10,8 @@ namespace Integrable.Kernels;
 /// <para>Dispatch (<see cref="Multiply"/>): exponents are shifted by the per-variable minima of each
 /// operand, which makes them non-negative and preserves the order. Coefficients are put over a
 /// common denominator; when the integers fit in words, products accumulate in a 64-, 128- or
-/// 192-bit accumulator chosen from the bound max|a|·max|b|·min(#a, #b) (so no overflow check is
-/// needed in the loop), otherwise in big integers. Then:</para>
+/// 192-bit accumulator chosen from the bound min(‖A‖₁·max|B|, max|A|·‖B‖₁) on every partial sum of
+/// a product coefficient (so no overflow check is needed in the loop), otherwise in big integers. Then:</para>
 /// <list type="bullet">
 /// <item>Dense (<see cref="MultiplyDense"/>) when both operands have at least
 /// <see cref="DenseMinTerms"/> terms and the product's degree box (Π over variables of the summed
@@ -59,17 +59,32 @@ internal static partial class PolynomialMultiply
         if (CoefficientForm.TryWords(ca, out var wa, out long da) && CoefficientForm.TryWords(cb, out var wb, out long db))
         {
             var den = (BigInteger)da * db;
-            int bits = CoefficientBounds.MaxBits(wa) + CoefficientBounds.MaxBits(wb) +
-                       CoefficientBounds.Bits((ulong)Math.Min(ca.Length, cb.Length));
-            if (bits <= 62) Run<Word64Ops, long, long>(wa, ea, wb, eb, in shape, den, out coeffs, out exps);
-            else if (bits <= 126 && NonNegative(wa) && NonNegative(wb)) Run<UWord128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps);
-            else if (bits <= 126) Run<Word128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps);
-            else Run<Word192Ops, long, Int192>(wa, ea, wb, eb, in shape, den, out coeffs, out exps);
+            switch (SelectAccumulator(wa, wb))
+            {
+                case Accumulator.Word64: Run<Word64Ops, long, long>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                case Accumulator.Split96: Run<UWord96Ops, long, Split96>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                case Accumulator.Unsigned128: Run<UWord128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                case Accumulator.Word128: Run<Word128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                default: Run<Word192Ops, long, Int192>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+            }
             return;
         }
         CoefficientForm.ToBig(ca, out var ba, out var bda);
         CoefficientForm.ToBig(cb, out var bb, out var bdb);
         Run<BigOps, BigInteger, BigInteger>(ba, ea, bb, eb, in shape, bda * bdb, out coeffs, out exps);
+    }
+
+    /// <summary>The narrowest accumulator that holds every partial sum of a product coefficient
+    /// (bound: <see cref="CoefficientBounds.ProductSumBits"/>); non-negative inputs get the unsigned
+    /// variants, whose inner loops are shorter.</summary>
+    internal static Accumulator SelectAccumulator(long[] wa, long[] wb)
+    {
+        int bits = CoefficientBounds.ProductSumBits(wa, wb);
+        if (bits <= 63) return Accumulator.Word64;
+        bool nonNegative = NonNegative(wa) && NonNegative(wb);
+        if (bits <= 96 && nonNegative) return Accumulator.Split96;
+        if (bits <= 127) return nonNegative ? Accumulator.Unsigned128 : Accumulator.Word128;
+        return Accumulator.Word192;
     }
 
     /// <summary>Which algorithm <see cref="Multiply"/> would use for these operands.</summary>
@@ -100,13 +115,10 @@ internal static partial class PolynomialMultiply
             for (int v = n - 1; v >= 0; v--) { stride[v] = st; st *= s.Radix[v]; }
             var ia = Index(ea, n, s.MinA, stride);
             var ib = Index(eb, n, s.MinB, stride);
-            int accBytes = Unsafe.SizeOf<TAcc>();
-            int shift = 4;
-            while (shift < 24 && (2L << (shift + 1)) * accBytes <= DenseBufferBytes && (1L << (shift + 1)) <= s.Box) shift++;
-            if (ForceDenseShift > 0) shift = ForceDenseShift;
+            DenseWindow(in s, Unsafe.SizeOf<TAcc>(), out long window, out bool aligned);
             var oi = new long[Math.Max(ca.Length, cb.Length)];
             acc = new TAcc[oi.Length];
-            count = MultiplyDense<TOps, TC, TAcc>(ia, ca, ib, cb, shift, ref oi, ref acc);
+            count = MultiplyDense<TOps, TC, TAcc>(ia, ca, ib, cb, window, aligned, ref oi, ref acc);
             exps = new int[count * n];
             for (int t = 0; t < count; t++)
             {
@@ -145,6 +157,22 @@ internal static partial class PolynomialMultiply
         for (int t = 0; t < count; t++) coeffs[t] = TOps.ToRational(in acc[t], in den);
     }
 
+    /// <summary>Window of the dense method. Preferred: the product of the radices of the trailing
+    /// variables that fits in <see cref="DenseBufferBytes"/> (no carries between windows, and every
+    /// window is one slice of fixed leading exponents); when that is smaller than 1/16 of the buffer,
+    /// a power of two half the buffer (carries go to the next window).</summary>
+    internal static void DenseWindow(in ProductShape s, int accBytes, out long window, out bool aligned)
+    {
+        long cells = Math.Max(4, DenseBufferBytes / accBytes);
+        if (ForceDenseShift > 0) { window = 1L << ForceDenseShift; aligned = false; return; }
+        long suffix = 1;
+        for (int v = s.Nvars - 1; v >= 0 && suffix * s.Radix[v] <= cells; v--) suffix *= s.Radix[v];
+        if (suffix * 16 >= cells || suffix == s.Box) { window = suffix; aligned = true; return; }
+        window = 2;
+        while (window * 4 <= cells && window * 2 <= s.Box) window *= 2;
+        aligned = false;
+    }
+
     private static bool NonNegative(long[] w)
     {
         foreach (var x in w) if (x < 0) return false;
@@ -174,6 +202,21 @@ internal enum MultiplyAlgorithm
     Heap,
     /// <summary>Dense array (Kronecker) method.</summary>
     Dense,
+}
+
+/// <summary>Accumulators of the word-coefficient paths (see <see cref="PolynomialMultiply.SelectAccumulator"/>).</summary>
+internal enum Accumulator
+{
+    /// <summary>Signed 64-bit.</summary>
+    Word64,
+    /// <summary>Carry-free split sums of non-negative products below 2^96.</summary>
+    Split96,
+    /// <summary>Unsigned 128-bit for non-negative products.</summary>
+    Unsigned128,
+    /// <summary>Signed 128-bit.</summary>
+    Word128,
+    /// <summary>Signed 192-bit.</summary>
+    Word192,
 }
 
 /// <summary>Exponent ranges of two operands and the degree box of their product.</summary>

@@ -90,6 +90,42 @@ public sealed class LaurentPolynomialMultiplyTests
         }
     }
 
+    [Theory]
+    [MemberData(nameof(Variants))]
+    public void Multiply_NonNegativeAndSignedWords_EveryAccumulatorMatchesNaive(string algorithm, int shift, int unused)
+    {
+        _ = unused;
+        var ring = new LaurentPolynomialRing("u", "v");
+        var rng = new Random(59 + shift);
+        var seen = new HashSet<Accumulator>();
+        foreach (int bits in new[] { 8, 30, 45, 62 })
+            foreach (bool signed in new[] { false, true })
+                for (int i = 0; i < 6; i++)
+                {
+                    LaurentPolynomial Make()
+                    {
+                        var b = ring.CreateBuilder();
+                        int terms = 2 + rng.Next(40);
+                        for (int t = 0; t < terms; t++)
+                        {
+                            long c = rng.NextInt64(1, 1L << bits) | (1L << (bits - 1));
+                            if (signed && rng.Next(2) == 0) c = -c;
+                            b.Add(c, [rng.Next(-4, 5), rng.Next(0, 9)]);
+                        }
+                        return b.ToPolynomial();
+                    }
+                    var a = Make();
+                    var c2 = Make();
+                    if (a.IsMonomial || c2.IsMonomial) continue;
+                    CoefficientForm.TryWords(a.Coefficients, out var wa, out _);
+                    CoefficientForm.TryWords(c2.Coefficients, out var wb, out _);
+                    seen.Add(PolynomialMultiply.SelectAccumulator(wa, wb));
+                    var p = WithAlgorithm(Parse(algorithm), shift, () => a * c2);
+                    PolynomialTestData.AssertSameAsNaive(PolynomialTestData.NaiveMultiply(a, c2), p, $"{algorithm}/{shift} bits {bits} signed {signed} iteration {i}");
+                }
+        Assert.Equal(5, seen.Count); // Word64, Split96, Unsigned128, Word128 and Word192 were all used
+    }
+
     [Fact]
     public void Multiply_Dispatcher_ChoosesDenseForFatemanAndHeapForSparse()
     {

@@ -1,0 +1,56 @@
+using System.Numerics;
+using Integrable.Numbers;
+
+namespace Integrable.Kernels;
+
+/// <summary>Turns rational coefficients into integers over one common denominator, so that the
+/// inner loops run on machine words (or big integers) instead of rationals.</summary>
+internal static class CoefficientForm
+{
+    /// <summary>Writes c_i = words_i / denominator with every words_i and the denominator in a word
+    /// (|words_i| &lt; 2^63). Fails when some value does not fit.</summary>
+    public static bool TryWords(ReadOnlySpan<Rational> c, out long[] words, out long denominator)
+    {
+        words = new long[c.Length];
+        denominator = 1;
+        bool allIntegers = true;
+        for (int i = 0; i < c.Length; i++)
+        {
+            if (!c[i].TryGetSmall(out long n, out long d)) return false;
+            words[i] = n;
+            if (d != 1)
+            {
+                allIntegers = false;
+                ulong g = IntegerMath.Gcd((ulong)denominator, (ulong)d);
+                long f = d / (long)g;
+                long hi = Math.BigMul(denominator, f, out long lo);
+                if (hi != 0 || lo < 0) return false;
+                denominator = lo;
+            }
+        }
+        if (allIntegers) return true;
+        for (int i = 0; i < c.Length; i++)
+        {
+            c[i].TryGetSmall(out long n, out long d);
+            long scale = denominator / d;
+            long hi = Math.BigMul(n, scale, out long lo);
+            if (hi != (lo >> 63) || lo == long.MinValue) return false;
+            words[i] = lo;
+        }
+        return true;
+    }
+
+    /// <summary>Writes c_i = ints_i / denominator with big integers.</summary>
+    public static void ToBig(ReadOnlySpan<Rational> c, out BigInteger[] ints, out BigInteger denominator)
+    {
+        denominator = BigInteger.One;
+        foreach (var r in c)
+        {
+            var d = r.Denominator;
+            if (!d.IsOne) denominator = denominator / BigInteger.GreatestCommonDivisor(denominator, d) * d;
+        }
+        ints = new BigInteger[c.Length];
+        for (int i = 0; i < c.Length; i++)
+            ints[i] = denominator.IsOne ? c[i].Numerator : c[i].Numerator * (denominator / c[i].Denominator);
+    }
+}

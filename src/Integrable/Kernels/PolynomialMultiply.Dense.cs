@@ -1,0 +1,125 @@
+using System.Runtime.CompilerServices;
+
+namespace Integrable.Kernels;
+
+internal static partial class PolynomialMultiply
+{
+    /// <summary>Dense (Kronecker / array) multiplication on mixed-radix indices.</summary>
+    /// <remarks>
+    /// <para>Each term's shifted exponent vector is encoded as one integer index in the radices of
+    /// the product's degree box, so the index of a product term is the sum of the indices of its
+    /// factors (no carries between digits, since each digit of the sum stays below its radix).
+    /// Descending lex order of exponents is descending index order.</para>
+    /// <para>The index space is cut into windows of <paramref name="window"/> indices; terms are
+    /// grouped by window (high part h = index / window). All pairs of groups (ga, gb) with
+    /// h_a + h_b = H add their products into a small buffer, windows are processed in descending H and
+    /// each finished window is scanned in descending order (only over the range that was touched), so
+    /// only that buffer is written in the inner loop and it stays in cache; the full box is never
+    /// allocated. When <paramref name="aligned"/> is set, the window is the product of the radices of
+    /// the trailing variables, low parts never carry (la + lb &lt; window) and the buffer holds one
+    /// window. Otherwise low sums may spill into the next window: the buffer holds windows H and
+    /// H + 1, and window H + 1 is final once all pairs of sum H are done.</para>
+    /// </remarks>
+    /// <returns>Number of output terms written to <paramref name="oi"/> (indices, descending) and
+    /// <paramref name="oc"/> (accumulators).</returns>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static int MultiplyDense<TOps, TC, TAcc>(
+        ReadOnlySpan<long> ia, ReadOnlySpan<TC> ca, ReadOnlySpan<long> ib, ReadOnlySpan<TC> cb, long window, bool aligned,
+        ref long[] oi, ref TAcc[] oc)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        int L = checked((int)window);
+        int na = ia.Length, nb = ib.Length;
+
+        CountGroups(ia, L, out var aStart, out var aHigh, out var la);
+        CountGroups(ib, L, out var bStart, out var bHigh, out var lb);
+        int ga = aHigh.Length, gb = bHigh.Length;
+        long minHB = bHigh[gb - 1], maxHB = bHigh[0];
+        var bLookup = new int[checked((int)(maxHB - minHB + 1))];
+        Array.Fill(bLookup, -1);
+        for (int g = 0; g < gb; g++) bLookup[bHigh[g] - minHB] = g;
+        var caArr = ca.ToArray();
+        var cbArr = cb.ToArray();
+
+        var buf = new TAcc[aligned ? L : 2 * L];
+        long hMax = aHigh[0] + bHigh[0], hMin = aHigh[ga - 1] + bHigh[gb - 1];
+        int count = 0;
+        // Touched ranges [lo, hi] of the two halves (empty when lo > hi).
+        int upLo = int.MaxValue, upHi = -1;
+        int gLo = 0, gHi = 0; // A groups whose partner high part lies in [minHB, maxHB]
+        for (long H = hMax; H >= hMin - (aligned ? 0 : 1); H--)
+        {
+            int lowLo = int.MaxValue, lowHi = -1;
+            while (gLo < ga && aHigh[gLo] > H - minHB) gLo++;
+            while (gHi < ga && aHigh[gHi] >= H - maxHB) gHi++;
+            for (int g = gLo; g < gHi; g++)
+            {
+                int bg = bLookup[H - aHigh[g] - minHB];
+                if (bg < 0) continue;
+                int b0 = bStart[bg], b1 = bStart[bg + 1];
+                int a0 = aStart[g], a1 = aStart[g + 1];
+                // Lows are descending inside a group: first + first is the largest cell, last + last the smallest.
+                int top = la[a0] + lb[b0], bottom = la[a1 - 1] + lb[b1 - 1];
+                if (top > lowHi) lowHi = top;
+                if (bottom < lowLo) lowLo = bottom;
+                TOps.MulAddBlock(ref buf[0], ref caArr[a0], ref la[a0], a1 - a0, ref cbArr[b0], ref lb[b0], b1 - b0);
+            }
+            if (aligned)
+            {
+                if (lowHi >= 0) Emit<TOps, TC, TAcc>(buf, lowLo, lowHi, H * (long)L, ref oi, ref oc, ref count);
+                continue;
+            }
+            // Unaligned: cells [L, 2L) are window H + 1, now final.
+            if (lowHi >= L) { upHi = Math.Max(upHi, lowHi); upLo = Math.Min(upLo, Math.Max(lowLo, L)); }
+            if (upHi >= L) Emit<TOps, TC, TAcc>(buf, upLo, upHi, H * (long)L, ref oi, ref oc, ref count);
+            upLo = int.MaxValue; upHi = -1;
+            if (lowHi >= 0 && lowLo < L)
+            {
+                int from = lowLo, to = Math.Min(lowHi, L - 1);
+                Array.Copy(buf, from, buf, from + L, to - from + 1);
+                Array.Clear(buf, from, to - from + 1);
+                upLo = from + L; upHi = to + L;
+            }
+        }
+        return count;
+    }
+
+    /// <summary>Appends the non-zero cells buf[hi..lo] (descending) with index base + cell, and clears them.</summary>
+    private static void Emit<TOps, TC, TAcc>(TAcc[] buf, int lo, int hi, long baseIndex, ref long[] oi, ref TAcc[] oc, ref int count)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        for (int k = hi; k >= lo; k--)
+        {
+            if (TOps.IsZero(in buf[k])) continue;
+            if (count == oc.Length) Grow(ref oi, ref oc, count + 1);
+            oi[count] = baseIndex + k;
+            oc[count] = buf[k];
+            count++;
+            buf[k] = default!;
+        }
+    }
+
+    private static void CountGroups(ReadOnlySpan<long> idx, int window, out int[] start, out long[] high, out int[] low)
+    {
+        int n = idx.Length, groups = 0;
+        low = new int[n];
+        var hs = new long[n];
+        long prev = long.MinValue;
+        for (int i = 0; i < n; i++)
+        {
+            long h = Math.DivRem(idx[i], window, out long r);
+            hs[i] = h;
+            low[i] = (int)r;
+            if (h != prev) { groups++; prev = h; }
+        }
+        start = new int[groups + 1];
+        high = new long[groups];
+        int g = -1;
+        prev = long.MinValue;
+        for (int i = 0; i < n; i++)
+        {
+            if (hs[i] != prev) { g++; start[g] = i; high[g] = hs[i]; prev = hs[i]; }
+        }
+        start[groups] = n;
+    }
+}

@@ -1,0 +1,263 @@
+using System.Numerics;
+using System.Runtime.CompilerServices;
+using Integrable.Numbers;
+
+namespace Integrable.Kernels;
+
+/// <summary>Multiplication of sparse Laurent polynomials given as flat arrays: coefficients and
+/// term-major exponent vectors sorted in descending lex order.</summary>
+/// <remarks>
+/// <para>Dispatch (<see cref="Multiply"/>): exponents are shifted by the per-variable minima of each
+/// operand, which makes them non-negative and preserves the order. Coefficients are put over a
+/// common denominator; when the integers fit in words, products accumulate in a 64-, 128- or
+/// 192-bit accumulator chosen from the bound min(‖A‖₁·max|B|, max|A|·‖B‖₁) on every partial sum of
+/// a product coefficient (so no overflow check is needed in the loop), otherwise in big integers. Then:</para>
+/// <list type="bullet">
+/// <item>Dense (<see cref="MultiplyDense"/>) when both operands have at least
+/// <see cref="DenseMinTerms"/> terms and the product's degree box (Π over variables of the summed
+/// exponent ranges + 1) holds at most <see cref="DenseBoxPerProduct"/> cells per term product
+/// #a·#b and at most <see cref="DenseMaxBox"/> cells. The dense method costs about one
+/// multiply-add per term product plus a cheap scan of each box cell that may be hit, while the heap
+/// costs a heap operation (tens of nanoseconds) per product, so dense wins as long as the box is
+/// not much larger than the number of products; for (1+x+y+z+t)^20·((1+x+y+z+t)^20+1) the box has
+/// 2.8·10⁶ cells for 1.1·10⁸ products.</item>
+/// <item>Otherwise Johnson's heap method (<see cref="MultiplyHeap1"/> on one packed word when the
+/// summed exponent ranges fit in 64 bits, <see cref="MultiplyHeapN"/> on several words), whose
+/// memory and time follow the number of terms whatever the degrees.</item>
+/// </list>
+/// <para>Thresholds are <c>internal static</c> so tests can force each path.</para>
+/// </remarks>
+internal static partial class PolynomialMultiply
+{
+    /// <summary>Forces an algorithm on the current thread (tests and benchmarks);
+    /// <see cref="MultiplyAlgorithm.Auto"/> (the default) dispatches.</summary>
+    [ThreadStatic] internal static MultiplyAlgorithm Force;
+
+    /// <summary>When positive, forces the dense method's window size to 2^value on the current
+    /// thread (tests use tiny windows to exercise the carries between windows).</summary>
+    [ThreadStatic] internal static int ForceDenseShift;
+
+    /// <summary>Dense is chosen only when the degree box has at most this many cells per term product.</summary>
+    internal static double DenseBoxPerProduct = 2.0;
+
+    /// <summary>Dense is never chosen above this box size.</summary>
+    internal static long DenseMaxBox = 1L << 32;
+
+    /// <summary>Dense is chosen only when both operands have at least this many terms.</summary>
+    internal static int DenseMinTerms = 16;
+
+    /// <summary>Size in bytes of the dense method's accumulator buffer (two windows); it should fit
+    /// in the first-level data cache.</summary>
+    internal static int DenseBufferBytes = 32 * 1024;
+
+    /// <summary>Multiplies A by B (both non-empty, canonical, <paramref name="nvars"/> variables).</summary>
+    /// <exception cref="OverflowException">A product exponent does not fit in 32 bits.</exception>
+    public static void Multiply(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
+        int nvars, out Rational[] coeffs, out int[] exps)
+    {
+        var shape = new ProductShape(ea, eb, ca.Length, cb.Length, nvars);
+        if (CoefficientForm.TryWords(ca, out var wa, out long da) && CoefficientForm.TryWords(cb, out var wb, out long db))
+        {
+            var den = (BigInteger)da * db;
+            switch (SelectAccumulator(wa, wb))
+            {
+                case Accumulator.Word64: Run<Word64Ops, long, long>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                case Accumulator.Split96: Run<UWord96Ops, long, Split96>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                case Accumulator.Unsigned128: Run<UWord128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                case Accumulator.Word128: Run<Word128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                default: Run<Word192Ops, long, Int192>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+            }
+            return;
+        }
+        CoefficientForm.ToBig(ca, out var ba, out var bda);
+        CoefficientForm.ToBig(cb, out var bb, out var bdb);
+        Run<BigOps, BigInteger, BigInteger>(ba, ea, bb, eb, in shape, bda * bdb, out coeffs, out exps);
+    }
+
+    /// <summary>The narrowest accumulator that holds every partial sum of a product coefficient
+    /// (bound: <see cref="CoefficientBounds.ProductSumBits"/>); non-negative inputs get the unsigned
+    /// variants, whose inner loops are shorter.</summary>
+    internal static Accumulator SelectAccumulator(long[] wa, long[] wb)
+    {
+        int bits = CoefficientBounds.ProductSumBits(wa, wb);
+        if (bits <= 63) return Accumulator.Word64;
+        bool nonNegative = NonNegative(wa) && NonNegative(wb);
+        if (bits <= 96 && nonNegative) return Accumulator.Split96;
+        if (bits <= 127) return nonNegative ? Accumulator.Unsigned128 : Accumulator.Word128;
+        return Accumulator.Word192;
+    }
+
+    /// <summary>Which algorithm <see cref="Multiply"/> would use for these operands.</summary>
+    internal static MultiplyAlgorithm Choose(in ProductShape s)
+    {
+        if (Force != MultiplyAlgorithm.Auto) return Force;
+        if (Math.Min(s.CountA, s.CountB) < DenseMinTerms) return MultiplyAlgorithm.Heap;
+        double products = (double)s.CountA * s.CountB;
+        if (s.Box <= DenseMaxBox && s.Box <= DenseBoxPerProduct * products) return MultiplyAlgorithm.Dense;
+        return MultiplyAlgorithm.Heap;
+    }
+
+    private static void Run<TOps, TC, TAcc>(TC[] ca, ReadOnlySpan<int> ea, TC[] cb, ReadOnlySpan<int> eb,
+        in ProductShape s, BigInteger den, out Rational[] coeffs, out int[] exps)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        int n = s.Nvars;
+        var offset = new long[n];
+        for (int v = 0; v < n; v++) offset[v] = (long)s.MinA[v] + s.MinB[v];
+        int count;
+        TAcc[] acc;
+        var algorithm = Choose(in s);
+        // Dense needs a window lookup table of Box / 2^shift entries: above DenseMaxBox use the heap even when forced.
+        if (algorithm == MultiplyAlgorithm.Dense && s.Box <= DenseMaxBox)
+        {
+            var stride = new long[n];
+            long st = 1;
+            for (int v = n - 1; v >= 0; v--) { stride[v] = st; st *= s.Radix[v]; }
+            var ia = Index(ea, n, s.MinA, stride);
+            var ib = Index(eb, n, s.MinB, stride);
+            DenseWindow(in s, Unsafe.SizeOf<TAcc>(), out long window, out bool aligned);
+            var oi = new long[Math.Max(ca.Length, cb.Length)];
+            acc = new TAcc[oi.Length];
+            count = MultiplyDense<TOps, TC, TAcc>(ia, ca, ib, cb, window, aligned, ref oi, ref acc);
+            exps = new int[count * n];
+            for (int t = 0; t < count; t++)
+            {
+                long x = oi[t];
+                for (int v = 0; v < n; v++)
+                {
+                    long digit = x / stride[v];
+                    x -= digit * stride[v];
+                    exps[t * n + v] = (int)(digit + offset[v]);
+                }
+            }
+        }
+        else
+        {
+            var maxValue = new long[n];
+            for (int v = 0; v < n; v++) maxValue[v] = s.Radix[v] - 1;
+            var layout = ExponentLayout.Create(maxValue, guard: false);
+            int N = layout.Words;
+            var pa = new ulong[ca.Length * N];
+            var pb = new ulong[cb.Length * N];
+            layout.Pack(ea, n, s.MinA, pa);
+            layout.Pack(eb, n, s.MinB, pb);
+            bool swap = cb.Length < ca.Length;
+            var oe = new ulong[Math.Max(ca.Length, cb.Length) * N];
+            acc = new TAcc[Math.Max(ca.Length, cb.Length)];
+            if (N == 1)
+                count = swap ? MultiplyHeap1<TOps, TC, TAcc>(pb, cb, pa, ca, ref oe, ref acc)
+                             : MultiplyHeap1<TOps, TC, TAcc>(pa, ca, pb, cb, ref oe, ref acc);
+            else
+                count = swap ? MultiplyHeapN<TOps, TC, TAcc>(pb, cb, pa, ca, N, ref oe, ref acc)
+                             : MultiplyHeapN<TOps, TC, TAcc>(pa, ca, pb, cb, N, ref oe, ref acc);
+            exps = new int[count * n];
+            layout.Unpack(oe, count, n, offset, exps);
+        }
+        coeffs = new Rational[count];
+        for (int t = 0; t < count; t++) coeffs[t] = TOps.ToRational(in acc[t], in den);
+    }
+
+    /// <summary>Window of the dense method. Preferred: the product of the radices of the trailing
+    /// variables that fits in <see cref="DenseBufferBytes"/> (no carries between windows, and every
+    /// window is one slice of fixed leading exponents); when that is smaller than 1/16 of the buffer,
+    /// a power of two half the buffer (carries go to the next window).</summary>
+    internal static void DenseWindow(in ProductShape s, int accBytes, out long window, out bool aligned)
+    {
+        long cells = Math.Max(4, DenseBufferBytes / accBytes);
+        if (ForceDenseShift > 0) { window = 1L << ForceDenseShift; aligned = false; return; }
+        long suffix = 1;
+        for (int v = s.Nvars - 1; v >= 0 && suffix * s.Radix[v] <= cells; v--) suffix *= s.Radix[v];
+        if (suffix * 16 >= cells || suffix == s.Box) { window = suffix; aligned = true; return; }
+        window = 2;
+        while (window * 4 <= cells && window * 2 <= s.Box) window *= 2;
+        aligned = false;
+    }
+
+    private static bool NonNegative(long[] w)
+    {
+        foreach (var x in w) if (x < 0) return false;
+        return true;
+    }
+
+    private static long[] Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride)
+    {
+        int terms = e.Length / n;
+        var idx = new long[terms];
+        for (int t = 0; t < terms; t++)
+        {
+            long x = 0;
+            for (int v = 0; v < n; v++) x += ((long)e[t * n + v] - min[v]) * stride[v];
+            idx[t] = x;
+        }
+        return idx;
+    }
+}
+
+/// <summary>Multiplication algorithms.</summary>
+internal enum MultiplyAlgorithm
+{
+    /// <summary>Let the dispatcher choose.</summary>
+    Auto,
+    /// <summary>Johnson's heap method.</summary>
+    Heap,
+    /// <summary>Dense array (Kronecker) method.</summary>
+    Dense,
+}
+
+/// <summary>Accumulators of the word-coefficient paths (see <see cref="PolynomialMultiply.SelectAccumulator"/>).</summary>
+internal enum Accumulator
+{
+    /// <summary>Signed 64-bit.</summary>
+    Word64,
+    /// <summary>Carry-free split sums of non-negative products below 2^96.</summary>
+    Split96,
+    /// <summary>Unsigned 128-bit for non-negative products.</summary>
+    Unsigned128,
+    /// <summary>Signed 128-bit.</summary>
+    Word128,
+    /// <summary>Signed 192-bit.</summary>
+    Word192,
+}
+
+/// <summary>Exponent ranges of two operands and the degree box of their product.</summary>
+internal readonly struct ProductShape
+{
+    public readonly int Nvars, CountA, CountB;
+    public readonly int[] MinA, MinB;
+    public readonly long[] Radix;
+    /// <summary>Number of cells of the product's degree box (saturates at long.MaxValue).</summary>
+    public readonly long Box;
+
+    public ProductShape(ReadOnlySpan<int> ea, ReadOnlySpan<int> eb, int countA, int countB, int nvars)
+    {
+        Nvars = nvars; CountA = countA; CountB = countB;
+        MinMax(ea, nvars, out MinA, out var maxA);
+        MinMax(eb, nvars, out MinB, out var maxB);
+        Radix = new long[nvars];
+        long box = 1;
+        for (int v = 0; v < nvars; v++)
+        {
+            long lo = (long)MinA[v] + MinB[v], hi = (long)maxA[v] + maxB[v];
+            if (lo < int.MinValue || hi > int.MaxValue)
+                throw new OverflowException($"Product exponent of variable #{v} leaves the 32-bit range.");
+            Radix[v] = hi - lo + 1;
+            box = box > long.MaxValue / Radix[v] ? long.MaxValue : box * Radix[v];
+        }
+        Box = box;
+    }
+
+    internal static void MinMax(ReadOnlySpan<int> e, int n, out int[] min, out int[] max)
+    {
+        min = new int[n];
+        max = new int[n];
+        min.AsSpan().Fill(int.MaxValue);
+        max.AsSpan().Fill(int.MinValue);
+        for (int t = 0; t < e.Length; t += n)
+            for (int v = 0; v < n; v++)
+            {
+                int x = e[t + v];
+                if (x < min[v]) min[v] = x;
+                if (x > max[v]) max[v] = x;
+            }
+    }
+}

@@ -8,6 +8,10 @@ internal static class CommandLineApp
     [
         new DemoCommand(),
         new IterateCommand(),
+        new LaurentCommand(),
+        new GrowthCommand(),
+        new PeriodCommand(),
+        new ConfineCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

@@ -37,6 +37,7 @@ public static class Periodicity
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="maxPeriod"/> &lt; 1 or too few points.</exception>
     /// <exception cref="ArgumentException">A parameter value names no parameter.</exception>
     /// <exception cref="SingularStepException">Every sampled orbit hits a division by zero: the map is not defined.</exception>
+    /// <exception cref="BudgetExceededException">The time limit was reached before an answer.</exception>
     /// <exception cref="OperationCanceledException">Cancelled.</exception>
     public static PeriodReport Find(Recurrence recurrence, int maxPeriod, PeriodOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
@@ -57,6 +58,7 @@ public static class Periodicity
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="maxPeriod"/> &lt; 1.</exception>
     /// <exception cref="ArgumentException">A parameter value names no parameter.</exception>
     /// <exception cref="SingularStepException">Every sampled orbit hits a division by zero.</exception>
+    /// <exception cref="BudgetExceededException">The time limit was reached before an answer.</exception>
     /// <exception cref="OperationCanceledException">Cancelled.</exception>
     public static PeriodReport Find(RecurrenceSystem system, int maxPeriod, PeriodOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
@@ -66,6 +68,19 @@ public static class Periodicity
     }
 
     private static PeriodReport Find(RecursionMap map, int maxPeriod, PeriodOptions options,
+        IProgress<AnalysisProgress>? progress, CancellationToken cancellation)
+    {
+        try
+        {
+            return FindCore(map, maxPeriod, options, progress, cancellation);
+        }
+        catch (BudgetHit e)
+        {
+            throw new BudgetExceededException(e.Limit, -1, $"period search stopped before an answer: {e.Message}");
+        }
+    }
+
+    private static PeriodReport FindCore(RecursionMap map, int maxPeriod, PeriodOptions options,
         IProgress<AnalysisProgress>? progress, CancellationToken cancellation)
     {
         ArgumentOutOfRangeException.ThrowIfLessThan(maxPeriod, 1);

@@ -40,6 +40,21 @@ internal static class CoefficientForm
         return true;
     }
 
+    /// <summary>Writes c_i = wide_i / denominator with every |wide_i| &lt; 2^126 (the dividend form of
+    /// exact division). Fails when some value does not fit.</summary>
+    public static bool TryWide(ReadOnlySpan<Rational> c, out Int128[] wide, out BigInteger denominator)
+    {
+        ToBig(c, out var ints, out denominator);
+        wide = new Int128[c.Length];
+        var limit = BigInteger.One << 126;
+        for (int i = 0; i < ints.Length; i++)
+        {
+            if (BigInteger.Abs(ints[i]) >= limit) return false;
+            wide[i] = (Int128)ints[i];
+        }
+        return true;
+    }
+
     /// <summary>Writes c_i = ints_i / denominator with big integers.</summary>
     public static void ToBig(ReadOnlySpan<Rational> c, out BigInteger[] ints, out BigInteger denominator)
     {

@@ -26,6 +26,9 @@ internal interface ICoefficientOps<TCoef, TAcc>
     /// loop nest alone.</summary>
     static abstract void MulAddBlock(ref TAcc buf, ref TCoef a, ref int la, int na, ref TCoef b, ref int lb, int nb);
 
+    /// <summary>buf[la[i] + lb[j]] −= a[i]·b[j] for i &lt; na, j &lt; nb (dense exact division).</summary>
+    static abstract void MulSubBlock(ref TAcc buf, ref TCoef a, ref int la, int na, ref TCoef b, ref int lb, int nb);
+
     /// <summary>acc = a.</summary>
     static abstract void Set(out TAcc acc, TCoef a);
 
@@ -59,6 +62,18 @@ internal struct Word64Ops : ICoefficientOps<long, long>
     {
         for (int j = 0; j < count; j++)
             Unsafe.Add(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulSubBlock(ref long buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref long row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
@@ -125,6 +140,29 @@ internal struct Word128Ops : ICoefficientOps<long, Int128>
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulSubBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        ref ulong d = ref Unsafe.As<Int128, ulong>(ref buf);
+        for (int i = 0; i < na; i++)
+        {
+            long ai = Unsafe.Add(ref a, i);
+            ulong ua = (ulong)ai;
+            long aSign = ai >> 63;
+            ref ulong row = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref la, i) * 2);
+            for (int j = 0; j < nb; j++)
+            {
+                long bj = Unsafe.Add(ref b, j);
+                ulong lo = (ulong)bj * ua;
+                ulong hi = UWord128Ops.MulHigh((ulong)bj, ua) - (ulong)((aSign & bj) + ((bj >> 63) & ai));
+                ref ulong c = ref Unsafe.Add(ref row, (nint)Unsafe.Add(ref lb, j) * 2);
+                ulong old = c;
+                Unsafe.Add(ref c, 1) -= hi + (old < lo ? 1UL : 0UL);
+                c = old - lo;
+            }
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
     public static void MulAddBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
     {
         for (int i = 0; i < na; i++)
@@ -186,6 +224,18 @@ internal struct UWord128Ops : ICoefficientOps<long, Int128>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static ulong MulHigh(ulong a, ulong b) =>
         System.Runtime.Intrinsics.X86.Bmi2.X64.IsSupported ? System.Runtime.Intrinsics.X86.Bmi2.X64.MultiplyNoFlags(a, b) : Math.BigMul(a, b, out _);
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulSubBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref Int128 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
     public static void MulAddBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
@@ -260,6 +310,18 @@ internal struct UWord96Ops : ICoefficientOps<long, Split96>
             ref ulong c = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j) * 2);
             c += (uint)lo;
             Unsafe.Add(ref c, 1) += (hi << 32) | (lo >> 32);
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulSubBlock(ref Split96 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref Split96 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
         }
     }
 
@@ -355,6 +417,18 @@ internal struct Word192Ops : ICoefficientOps<long, Int192>
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulSubBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref Int192 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
     public static void MulAddBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
     {
         for (int i = 0; i < na; i++)
@@ -398,6 +472,18 @@ internal struct BigOps : ICoefficientOps<BigInteger, BigInteger>
     {
         for (int j = 0; j < count; j++)
             Unsafe.Add(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulSubBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref BigInteger row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            BigInteger ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]

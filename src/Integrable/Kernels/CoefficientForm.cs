@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 using Integrable.Numbers;
 
@@ -9,6 +10,7 @@ internal static class CoefficientForm
 {
     /// <summary>Writes c_i = words_i / denominator with every words_i and the denominator in a word
     /// (|words_i| &lt; 2^63). Fails when some value does not fit.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryWords(ReadOnlySpan<Rational> c, out long[] words, out long denominator)
     {
         words = new long[c.Length];
@@ -42,6 +44,7 @@ internal static class CoefficientForm
 
     /// <summary>Writes c_i = wide_i / denominator with every |wide_i| &lt; 2^126 (the dividend form of
     /// exact division). Fails when some value does not fit.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryWide(ReadOnlySpan<Rational> c, out Int128[] wide, out BigInteger denominator)
     {
         ToBig(c, out var ints, out denominator);
@@ -56,6 +59,7 @@ internal static class CoefficientForm
     }
 
     /// <summary>Writes c_i = ints_i / denominator with big integers.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void ToBig(ReadOnlySpan<Rational> c, out BigInteger[] ints, out BigInteger denominator)
     {
         denominator = BigInteger.One;

@@ -312,6 +312,7 @@ internal static partial class PolynomialDivide
     /// stops with <see cref="DivideStatus.TooLarge"/> as soon as its bound could be exceeded), and big
     /// integers when the coefficients do not fit words.</remarks>
     /// <returns>True with the quotient when B divides A; false otherwise.</returns>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryDivide(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
         int n, out Rational[] coeffs, out int[] exps)
     {
@@ -474,6 +475,7 @@ internal static partial class PolynomialDivide
             return status;
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private long[] Index(int[] e, int[] min)
         {
             int terms = e.Length / _n;
@@ -494,6 +496,7 @@ internal static partial class PolynomialDivide
             return Finish(result, qe, out coeffs, out exps);
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public bool Finish(Rational[] result, QuotientExponents qe, out Rational[] coeffs, out int[] exps)
         {
             int count = qe.Count;

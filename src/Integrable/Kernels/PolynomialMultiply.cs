@@ -52,6 +52,7 @@ internal static partial class PolynomialMultiply
 
     /// <summary>Multiplies A by B (both non-empty, canonical, <paramref name="nvars"/> variables).</summary>
     /// <exception cref="OverflowException">A product exponent does not fit in 32 bits.</exception>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void Multiply(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
         int nvars, out Rational[] coeffs, out int[] exps)
     {
@@ -97,6 +98,7 @@ internal static partial class PolynomialMultiply
         return MultiplyAlgorithm.Heap;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Run<TOps, TC, TAcc>(TC[] ca, ReadOnlySpan<int> ea, TC[] cb, ReadOnlySpan<int> eb,
         in ProductShape s, BigInteger den, out Rational[] coeffs, out int[] exps)
         where TOps : ICoefficientOps<TC, TAcc>
@@ -179,6 +181,7 @@ internal static partial class PolynomialMultiply
         return true;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static long[] Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride)
     {
         int terms = e.Length / n;
@@ -246,6 +249,7 @@ internal readonly struct ProductShape
         Box = box;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static void MinMax(ReadOnlySpan<int> e, int n, out int[] min, out int[] max)
     {
         min = new int[n];

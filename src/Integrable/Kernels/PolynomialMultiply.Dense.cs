@@ -35,9 +35,6 @@ internal static partial class PolynomialMultiply
         CountGroups(ib, L, out var bStart, out var bHigh, out var lb);
         int ga = aHigh.Length, gb = bHigh.Length;
         long minHB = bHigh[gb - 1], maxHB = bHigh[0];
-        var bLookup = new int[checked((int)(maxHB - minHB + 1))];
-        Array.Fill(bLookup, -1);
-        for (int g = 0; g < gb; g++) bLookup[bHigh[g] - minHB] = g;
         var caArr = ca.ToArray();
         var cbArr = cb.ToArray();
 
@@ -52,10 +49,15 @@ internal static partial class PolynomialMultiply
             int lowLo = int.MaxValue, lowHi = -1;
             while (gLo < ga && aHigh[gLo] > H - minHB) gLo++;
             while (gHi < ga && aHigh[gHi] >= H - maxHB) gHi++;
-            for (int g = gLo; g < gHi; g++)
+            // Along the A groups of the window, the partner high part H − h_a increases, so the
+            // matching B groups (sorted by decreasing high part) are found by one backward walk.
+            int bg = gHi > gLo ? LastAtLeast(bHigh, H - aHigh[gLo]) : -1;
+            for (int g = gLo; g < gHi && bg >= 0; g++)
             {
-                int bg = bLookup[H - aHigh[g] - minHB];
-                if (bg < 0) continue;
+                long target = H - aHigh[g];
+                while (bg >= 0 && bHigh[bg] < target) bg--;
+                if (bg < 0) break;
+                if (bHigh[bg] != target) continue;
                 int b0 = bStart[bg], b1 = bStart[bg + 1];
                 int a0 = aStart[g], a1 = aStart[g + 1];
                 // Lows are descending inside a group: first + first is the largest cell, last + last the smallest.
@@ -97,6 +99,18 @@ internal static partial class PolynomialMultiply
             count++;
             buf[k] = default!;
         }
+    }
+
+    /// <summary>Largest index g with high[g] ≥ <paramref name="target"/> in a descending array, or −1.</summary>
+    private static int LastAtLeast(long[] high, long target)
+    {
+        int lo = 0, hi = high.Length - 1, best = -1;
+        while (lo <= hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (high[mid] >= target) { best = mid; lo = mid + 1; } else hi = mid - 1;
+        }
+        return best;
     }
 
     private static void CountGroups(ReadOnlySpan<long> idx, int window, out int[] start, out long[] high, out int[] low)

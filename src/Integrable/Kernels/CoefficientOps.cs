@@ -290,23 +290,11 @@ internal struct UWord96Ops : ICoefficientOps<long, Split96>
     {
         ref ulong d = ref Unsafe.As<Split96, ulong>(ref dest);
         ulong ua = (ulong)a;
-        int j = 0;
-        for (; j + 1 < count; j += 2)
-        {
-            ulong b0 = (ulong)Unsafe.Add(ref b, j), b1 = (ulong)Unsafe.Add(ref b, j + 1);
-            ulong lo0 = b0 * ua, hi0 = UWord128Ops.MulHigh(b0, ua);
-            ulong lo1 = b1 * ua, hi1 = UWord128Ops.MulHigh(b1, ua);
-            ref ulong c0 = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j) * 2);
-            ref ulong c1 = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j + 1) * 2);
-            c0 += (uint)lo0;
-            Unsafe.Add(ref c0, 1) += (hi0 << 32) | (lo0 >> 32);
-            c1 += (uint)lo1;
-            Unsafe.Add(ref c1, 1) += (hi1 << 32) | (lo1 >> 32);
-        }
-        if (j < count)
+        for (int j = 0; j < count; j++)
         {
             ulong bj = (ulong)Unsafe.Add(ref b, j);
-            ulong lo = bj * ua, hi = UWord128Ops.MulHigh(bj, ua);
+            ulong hi = UWord128Ops.MulHigh(bj, ua);
+            ulong lo = bj * ua;
             ref ulong c = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j) * 2);
             c += (uint)lo;
             Unsafe.Add(ref c, 1) += (hi << 32) | (lo >> 32);

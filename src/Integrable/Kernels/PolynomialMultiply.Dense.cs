@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using System.Runtime.CompilerServices;
 
 namespace Integrable.Kernels;
@@ -35,10 +36,10 @@ internal static partial class PolynomialMultiply
         CountGroups(ib, L, out var bStart, out var bHigh, out var lb);
         int ga = aHigh.Length, gb = bHigh.Length;
         long minHB = bHigh[gb - 1], maxHB = bHigh[0];
-        var caArr = ca.ToArray();
-        var cbArr = cb.ToArray();
-
-        var buf = new TAcc[aligned ? L : 2 * L];
+        ref TC caRef = ref MemoryMarshal.GetReference(ca);
+        ref TC cbRef = ref MemoryMarshal.GetReference(cb);
+        int bufLength = aligned ? L : 2 * L;
+        var buf = Pool.RentCleared<TAcc>(bufLength);
         long hMax = aHigh[0] + bHigh[0], hMin = aHigh[ga - 1] + bHigh[gb - 1];
         int count = 0;
         // Touched ranges [lo, hi] of the two halves (empty when lo > hi).
@@ -64,7 +65,7 @@ internal static partial class PolynomialMultiply
                 int top = la[a0] + lb[b0], bottom = la[a1 - 1] + lb[b1 - 1];
                 if (top > lowHi) lowHi = top;
                 if (bottom < lowLo) lowLo = bottom;
-                TOps.MulAddBlock(ref buf[0], ref caArr[a0], ref la[a0], a1 - a0, ref cbArr[b0], ref lb[b0], b1 - b0);
+                TOps.MulAddBlock(ref buf[0], ref Unsafe.Add(ref caRef, a0), ref la[a0], a1 - a0, ref Unsafe.Add(ref cbRef, b0), ref lb[b0], b1 - b0);
             }
             if (aligned)
             {
@@ -83,6 +84,9 @@ internal static partial class PolynomialMultiply
                 upLo = from + L; upHi = to + L;
             }
         }
+        Pool.Return(buf);
+        Pool.Return(la);
+        Pool.Return(lb);
         return count;
     }
 
@@ -93,7 +97,11 @@ internal static partial class PolynomialMultiply
         for (int k = hi; k >= lo; k--)
         {
             if (TOps.IsZero(in buf[k])) continue;
-            if (count == oc.Length) Grow(ref oi, ref oc, count + 1);
+            if (count == oc.Length || count == oi.Length)
+            {
+                Pool.Grow(ref oi, count, count + 1);
+                Pool.Grow(ref oc, count, count + 1);
+            }
             oi[count] = baseIndex + k;
             oc[count] = buf[k];
             count++;
@@ -116,8 +124,8 @@ internal static partial class PolynomialMultiply
     private static void CountGroups(ReadOnlySpan<long> idx, int window, out int[] start, out long[] high, out int[] low)
     {
         int n = idx.Length, groups = 0;
-        low = new int[n];
-        var hs = new long[n];
+        low = Pool.Rent<int>(n);
+        var hs = Pool.Rent<long>(n);
         long prev = long.MinValue;
         for (int i = 0; i < n; i++)
         {
@@ -135,5 +143,6 @@ internal static partial class PolynomialMultiply
             if (hs[i] != prev) { g++; start[g] = i; high[g] = hs[i]; prev = hs[i]; }
         }
         start[groups] = n;
+        Pool.Return(hs);
     }
 }

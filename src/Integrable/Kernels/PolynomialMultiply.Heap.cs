@@ -92,7 +92,7 @@ internal static partial class PolynomialMultiply
 
             if (!TOps.IsZero(in acc))
             {
-                if (count == oc.Length) Grow(ref oe, ref oc, count + 1);
+                if (count == oc.Length || count == oe.Length) Grow(ref oe, ref oc, count);
                 oe[count] = exp;
                 oc[count] = acc;
                 count++;
@@ -285,17 +285,16 @@ internal static partial class PolynomialMultiply
         for (int w = 0; w < r.Length; w++) r[w] = a[w] + b[w];
     }
 
-    private static void Grow<TE, TAcc>(ref TE[] oe, ref TAcc[] oc, int needed)
+    private static void Grow<TE, TAcc>(ref TE[] oe, ref TAcc[] oc, int count)
     {
-        int size = Math.Max(needed, Math.Max(16, oc.Length * 2));
-        Array.Resize(ref oe, size);
-        Array.Resize(ref oc, size);
+        Pool.Grow(ref oe, count, count + 1);
+        Pool.Grow(ref oc, count, count + 1);
     }
 
     private static void GrowN<TAcc>(ref ulong[] oe, ref TAcc[] oc, int needed, int words)
     {
-        int size = Math.Max(needed, Math.Max(16, oc.Length * 2));
-        Array.Resize(ref oe, size * words);
-        Array.Resize(ref oc, size);
+        int count = needed - 1;
+        Pool.Grow(ref oe, count * words, needed * words);
+        Pool.Grow(ref oc, count, needed);
     }
 }

@@ -109,18 +109,23 @@ internal static partial class PolynomialMultiply
         int count;
         TAcc[] acc;
         var algorithm = Choose(in s);
-        // Dense needs a window lookup table of Box / 2^shift entries: above DenseMaxBox use the heap even when forced.
+        int estimate = Math.Max(ca.Length, cb.Length) * 2;
+        // Dense needs per-window scratch proportional to Box / window: above DenseMaxBox use the heap even when forced.
         if (algorithm == MultiplyAlgorithm.Dense && s.Box <= DenseMaxBox)
         {
             var stride = new long[n];
             long st = 1;
             for (int v = n - 1; v >= 0; v--) { stride[v] = st; st *= s.Radix[v]; }
-            var ia = Index(ea, n, s.MinA, stride);
-            var ib = Index(eb, n, s.MinB, stride);
+            var ia = Pool.Rent<long>(ca.Length);
+            var ib = Pool.Rent<long>(cb.Length);
+            Index(ea, n, s.MinA, stride, ia);
+            Index(eb, n, s.MinB, stride, ib);
             DenseWindow(in s, Unsafe.SizeOf<TAcc>(), out long window, out bool aligned);
-            var oi = new long[Math.Max(ca.Length, cb.Length)];
-            acc = new TAcc[oi.Length];
-            count = MultiplyDense<TOps, TC, TAcc>(ia, ca, ib, cb, window, aligned, ref oi, ref acc);
+            var oi = Pool.Rent<long>(estimate);
+            acc = Pool.Rent<TAcc>(estimate);
+            count = MultiplyDense<TOps, TC, TAcc>(ia.AsSpan(0, ca.Length), ca, ib.AsSpan(0, cb.Length), cb, window, aligned, ref oi, ref acc);
+            Pool.Return(ia);
+            Pool.Return(ib);
             exps = new int[count * n];
             for (int t = 0; t < count; t++)
             {
@@ -132,6 +137,7 @@ internal static partial class PolynomialMultiply
                     exps[t * n + v] = (int)(digit + offset[v]);
                 }
             }
+            Pool.Return(oi);
         }
         else
         {
@@ -139,24 +145,48 @@ internal static partial class PolynomialMultiply
             for (int v = 0; v < n; v++) maxValue[v] = s.Radix[v] - 1;
             var layout = ExponentLayout.Create(maxValue, guard: false);
             int N = layout.Words;
-            var pa = new ulong[ca.Length * N];
-            var pb = new ulong[cb.Length * N];
+            var pa = Pool.Rent<ulong>(ca.Length * N);
+            var pb = Pool.Rent<ulong>(cb.Length * N);
             layout.Pack(ea, n, s.MinA, pa);
             layout.Pack(eb, n, s.MinB, pb);
+            var ra = pa.AsSpan(0, ca.Length * N);
+            var rb = pb.AsSpan(0, cb.Length * N);
             bool swap = cb.Length < ca.Length;
-            var oe = new ulong[Math.Max(ca.Length, cb.Length) * N];
-            acc = new TAcc[Math.Max(ca.Length, cb.Length)];
+            var oe = Pool.Rent<ulong>(estimate * N);
+            acc = Pool.Rent<TAcc>(estimate);
             if (N == 1)
-                count = swap ? MultiplyHeap1<TOps, TC, TAcc>(pb, cb, pa, ca, ref oe, ref acc)
-                             : MultiplyHeap1<TOps, TC, TAcc>(pa, ca, pb, cb, ref oe, ref acc);
+                count = swap ? MultiplyHeap1<TOps, TC, TAcc>(rb, cb, ra, ca, ref oe, ref acc)
+                             : MultiplyHeap1<TOps, TC, TAcc>(ra, ca, rb, cb, ref oe, ref acc);
             else
-                count = swap ? MultiplyHeapN<TOps, TC, TAcc>(pb, cb, pa, ca, N, ref oe, ref acc)
-                             : MultiplyHeapN<TOps, TC, TAcc>(pa, ca, pb, cb, N, ref oe, ref acc);
+                count = swap ? MultiplyHeapN<TOps, TC, TAcc>(rb, cb, ra, ca, N, ref oe, ref acc)
+                             : MultiplyHeapN<TOps, TC, TAcc>(ra, ca, rb, cb, N, ref oe, ref acc);
+            Pool.Return(pa);
+            Pool.Return(pb);
             exps = new int[count * n];
             layout.Unpack(oe, count, n, offset, exps);
+            Pool.Return(oe);
         }
         coeffs = new Rational[count];
         for (int t = 0; t < count; t++) coeffs[t] = TOps.ToRational(in acc[t], in den);
+        Pool.Return(acc);
+    }
+
+    private static bool NonNegative(long[] w)
+    {
+        foreach (var x in w) if (x < 0) return false;
+        return true;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride, long[] idx)
+    {
+        int terms = e.Length / n;
+        for (int t = 0; t < terms; t++)
+        {
+            long x = 0;
+            for (int v = 0; v < n; v++) x += ((long)e[t * n + v] - min[v]) * stride[v];
+            idx[t] = x;
+        }
     }
 
     /// <summary>Window of the dense method. Preferred: the product of the radices of the trailing
@@ -175,25 +205,6 @@ internal static partial class PolynomialMultiply
         aligned = false;
     }
 
-    private static bool NonNegative(long[] w)
-    {
-        foreach (var x in w) if (x < 0) return false;
-        return true;
-    }
-
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static long[] Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride)
-    {
-        int terms = e.Length / n;
-        var idx = new long[terms];
-        for (int t = 0; t < terms; t++)
-        {
-            long x = 0;
-            for (int v = 0; v < n; v++) x += ((long)e[t * n + v] - min[v]) * stride[v];
-            idx[t] = x;
-        }
-        return idx;
-    }
 }
 
 /// <summary>Multiplication algorithms.</summary>

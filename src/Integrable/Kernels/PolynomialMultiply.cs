@@ -7,25 +7,32 @@ namespace Integrable.Kernels;
 /// <summary>Multiplication of sparse Laurent polynomials given as flat arrays: coefficients and
 /// term-major exponent vectors sorted in descending lex order.</summary>
 /// <remarks>
-/// <para>Dispatch (<see cref="Multiply"/>): exponents are shifted by the per-variable minima of each
-/// operand, which makes them non-negative and preserves the order. Coefficients are put over a
-/// common denominator; when the integers fit in words, products accumulate in a 64-, 128- or
-/// 192-bit accumulator chosen from the bound min(‖A‖₁·max|B|, max|A|·‖B‖₁) on every partial sum of
-/// a product coefficient (so no overflow check is needed in the loop), otherwise in big integers. Then:</para>
+/// <para>Dispatch (<see cref="Multiply"/>; zero, constant and monomial operands are handled by the
+/// caller): exponents are shifted by the per-variable minima of each operand, which makes them
+/// non-negative and preserves the order. Coefficients are put over a common denominator; when the
+/// integers fit in words, products accumulate in the narrowest accumulator that the bound
+/// min(‖A‖₁·max|B|, max|A|·‖B‖₁) on every partial sum of a product coefficient allows
+/// (<see cref="SelectAccumulator"/>: 64-bit; for non-negative inputs a carry-free split 96-bit or
+/// unsigned 128-bit; signed 128-bit; 192-bit), so the inner loops never test for overflow; otherwise
+/// big integers. Then:</para>
 /// <list type="bullet">
 /// <item>Dense (<see cref="MultiplyDense"/>) when both operands have at least
 /// <see cref="DenseMinTerms"/> terms and the product's degree box (Π over variables of the summed
 /// exponent ranges + 1) holds at most <see cref="DenseBoxPerProduct"/> cells per term product
-/// #a·#b and at most <see cref="DenseMaxBox"/> cells. The dense method costs about one
-/// multiply-add per term product plus a cheap scan of each box cell that may be hit, while the heap
-/// costs a heap operation (tens of nanoseconds) per product, so dense wins as long as the box is
-/// not much larger than the number of products; for (1+x+y+z+t)^20·((1+x+y+z+t)^20+1) the box has
-/// 2.8·10⁶ cells for 1.1·10⁸ products.</item>
+/// #a·#b and at most <see cref="DenseMaxBox"/> cells. Reason: the dense method costs about one
+/// multiply-add (a few cycles) per term product plus the scan of the touched part of each window,
+/// while the heap costs a heap operation (tens of nanoseconds) per product; so dense wins unless
+/// the box is much larger than the number of products. For (1+x+y+z+t)^20·((1+x+y+z+t)^20+1) the
+/// box has 2.8·10⁶ cells for 1.1·10⁸ products; for the sparse product
+/// (1+x+y+2z²+3t³+5u⁵)^8·(1+u+t+2z²+3y³+5x⁵)^8 it has 8.6·10⁷ cells for 1.7·10⁶ products and the
+/// heap is chosen. Windows are aligned to the trailing variables when such a slice fits in
+/// <see cref="DenseBufferBytes"/> (see <see cref="DenseWindow"/>).</item>
 /// <item>Otherwise Johnson's heap method (<see cref="MultiplyHeap1"/> on one packed word when the
 /// summed exponent ranges fit in 64 bits, <see cref="MultiplyHeapN"/> on several words), whose
 /// memory and time follow the number of terms whatever the degrees.</item>
 /// </list>
-/// <para>Thresholds are <c>internal static</c> so tests can force each path.</para>
+/// <para>Thresholds are <c>internal static</c>; <see cref="Force"/> and
+/// <see cref="ForceDenseShift"/> let tests and benchmarks pin each path on their thread.</para>
 /// </remarks>
 internal static partial class PolynomialMultiply
 {
@@ -46,8 +53,8 @@ internal static partial class PolynomialMultiply
     /// <summary>Dense is chosen only when both operands have at least this many terms.</summary>
     internal static int DenseMinTerms = 16;
 
-    /// <summary>Size in bytes of the dense method's accumulator buffer (two windows); it should fit
-    /// in the first-level data cache.</summary>
+    /// <summary>Size in bytes of the dense method's accumulator buffer; it should fit in the
+    /// first-level data cache (48 KiB per core on the reference machine).</summary>
     internal static int DenseBufferBytes = 32 * 1024;
 
     /// <summary>Multiplies A by B (both non-empty, canonical, <paramref name="nvars"/> variables).</summary>

@@ -60,7 +60,7 @@ internal struct Word64Ops : ICoefficientOps<long, long>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static void MulAddRow(ref long dest, long a, ref long b, ref int off, int count)
     {
-        for (int j = 0; j < count; j++)
+        for (nint j = 0; j < count; j++)
             Unsafe.Add(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
     }
 
@@ -290,7 +290,7 @@ internal struct UWord96Ops : ICoefficientOps<long, Split96>
     {
         ref ulong d = ref Unsafe.As<Split96, ulong>(ref dest);
         ulong ua = (ulong)a;
-        for (int j = 0; j < count; j++)
+        for (nint j = 0; j < count; j++)
         {
             ulong bj = (ulong)Unsafe.Add(ref b, j);
             ulong hi = UWord128Ops.MulHigh(bj, ua);

@@ -338,7 +338,6 @@ internal static partial class PolynomialDivide
         if (!ShiftedDivides(ea[..n], minA, eb[..n], minB, qRange) ||
             !ShiftedDivides(ea[^n..], minA, eb[^n..], minB, qRange))
             return false;
-        if (ca.Length < cb.Length) return false;
 
         var ctx = new DivisionInput(ca, ea, cb, eb, n, minA, minB, qRange, offset, radix, box);
         if (CoefficientForm.TryWords(cb, out var wb, out long db) && CoefficientForm.TryWide(ca, out var pw, out var dp))

@@ -180,6 +180,22 @@ public sealed class LaurentPolynomialDivisionTests
         Assert.True(R.Zero.TryDivideExact(d, out var zq) && zq.IsZero);
     }
 
+    [Theory]
+    [MemberData(nameof(Algorithms))]
+    public void TryDivideExact_DividendWithFewerTermsThanDivisor_Succeeds(string algorithm)
+    {
+        // x³ + 1 = (x + 1)(x² − x + 1) and x^n − 1 = (x − 1)(x^(n−1) + … + 1): dividends can be
+        // much shorter than divisors (worked by hand).
+        var x = R.Variable(0);
+        var y = R.Variable(1);
+        Assert.True(WithDivision(Parse(algorithm), () => (x.Pow(3) + 1).TryDivideExact(x * x - x + 1, out var q) && q == x + 1));
+        var geometric = R.Zero;
+        for (int k = 0; k < 40; k++) geometric += x.Pow(k) * y.Pow(-k);
+        var p = x.Pow(40) * y.Pow(-40) - 1;
+        Assert.True(WithDivision(Parse(algorithm), () => p.TryDivideExact(geometric, out var q2) && q2 == x * y.Pow(-1) - 1));
+        Assert.True(WithDivision(Parse(algorithm), () => p.TryDivideExact(x * y.Pow(-1) - 1, out var q3) && q3 == geometric));
+    }
+
     [Fact]
     public void DivideExact_ZeroDivisor_Throws()
     {

@@ -36,6 +36,8 @@ internal static partial class PolynomialMultiply
         CountGroups(ib, L, out var bStart, out var bHigh, out var lb);
         int ga = aHigh.Length, gb = bHigh.Length;
         long minHB = bHigh[gb - 1], maxHB = bHigh[0];
+        var lbBytes = Pool.Rent<nint>(nb);
+        for (int j = 0; j < nb; j++) lbBytes[j] = (nint)lb[j] * Unsafe.SizeOf<TAcc>();
         ref TC caRef = ref MemoryMarshal.GetReference(ca);
         ref TC cbRef = ref MemoryMarshal.GetReference(cb);
         int bufLength = aligned ? L : 2 * L;
@@ -65,7 +67,7 @@ internal static partial class PolynomialMultiply
                 int top = la[a0] + lb[b0], bottom = la[a1 - 1] + lb[b1 - 1];
                 if (top > lowHi) lowHi = top;
                 if (bottom < lowLo) lowLo = bottom;
-                TOps.MulAddBlock(ref buf[0], ref Unsafe.Add(ref caRef, a0), ref la[a0], a1 - a0, ref Unsafe.Add(ref cbRef, b0), ref lb[b0], b1 - b0);
+                TOps.MulAddBlock(ref buf[0], ref Unsafe.Add(ref caRef, a0), ref la[a0], a1 - a0, ref Unsafe.Add(ref cbRef, b0), ref lbBytes[b0], b1 - b0);
             }
             if (aligned)
             {
@@ -87,6 +89,7 @@ internal static partial class PolynomialMultiply
         Pool.Return(buf);
         Pool.Return(la);
         Pool.Return(lb);
+        Pool.Return(lbBytes);
         return count;
     }
 

@@ -62,8 +62,13 @@ internal struct Word64Ops : ICoefficientOps<long, long>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static void MulAddRow(ref long dest, long a, ref long b, ref nint off, int count)
     {
-        for (nint j = 0; j < count; j++)
+        nint j = 0;
+        for (; j + 1 < count; j += 2)
+        {
             Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
+            Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j + 1)) += a * Unsafe.Add(ref b, j + 1);
+        }
+        if (j < count) Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]

@@ -1,0 +1,341 @@
+using System.Buffers;
+using System.Numerics;
+using System.Runtime.CompilerServices;
+
+namespace Integrable.Kernels.Univariate;
+
+/// <summary>Polynomial products modulo a word prime p &lt; 2^62 by number-theoretic transforms over up
+/// to six NTT primes q &lt; 2^30 and Chinese remaindering (Garner) back to p.</summary>
+/// <remarks>
+/// <para>The product of two polynomials with coefficients in [0, p) has integer coefficients below
+/// min(len a, len b)·(p − 1)²; with k primes whose product exceeds that bound (times the number of
+/// products summed in the transform domain) the integer coefficients are recovered exactly by Garner's
+/// mixed-radix algorithm and then reduced mod p. For p = 2^31 − 1 three primes suffice up to length 2^23;
+/// for p near 2^62 five or six are needed.</para>
+/// <para>When p itself is an NTT prime below 2^30 with enough 2-adicity, a single transform modulo p
+/// is used directly (no remaindering).</para>
+/// </remarks>
+internal sealed class NttMultiplier
+{
+    // NTT primes c·2^23 + 1 < 2^30 (all with 2-adicity ≥ 23), largest first, with a primitive root each.
+    private static readonly (uint Q, uint Root)[] PrimeTable =
+    [
+        (998244353, 3), (897581057, 3), (880803841, 26), (754974721, 11), (645922817, 3), (595591169, 3),
+    ];
+
+    private static readonly NttPrime[] SharedPrimes = CreatePrimes();
+
+    private static NttPrime[] CreatePrimes()
+    {
+        var r = new NttPrime[PrimeTable.Length];
+        for (int i = 0; i < r.Length; i++) r[i] = new NttPrime(PrimeTable[i].Q, PrimeTable[i].Root);
+        return r;
+    }
+
+    private readonly ModulusReducer _mod;
+    private readonly bool _small;                 // p < 2^32
+    private readonly NttPrime[] _primes;          // the transform primes (or just p itself)
+    private readonly bool _direct;                // p is the single transform prime
+    private readonly BigInteger[] _prefixProducts; // q_0⋯q_{i−1} as exact integers, i = 0..k
+    private readonly ulong[] _prefixModP;          // q_0⋯q_{i−1} mod p
+    private readonly uint[][] _garnerInv;          // _garnerInv[i][j] = q_j^{-1}·R mod q_i (j < i)
+
+    public NttMultiplier(ulong p)
+    {
+        _mod = new ModulusReducer(p);
+        _small = p < (1UL << 32);
+        uint directRoot = 0;
+        if (p < (1UL << 30) && p > 2 && BitOperations.TrailingZeroCount(p - 1) >= NttPrime.MaxLog)
+            directRoot = FindPrimitiveRoot((uint)p);
+        if (directRoot != 0)
+        {
+            _direct = true;
+            _primes = [new NttPrime((uint)p, directRoot)];
+        }
+        else _primes = SharedPrimes;
+        int k = _primes.Length;
+        _prefixProducts = new BigInteger[k + 1];
+        _prefixModP = new ulong[k + 1];
+        _prefixProducts[0] = BigInteger.One;
+        for (int i = 0; i < k; i++) _prefixProducts[i + 1] = _prefixProducts[i] * _primes[i].Q;
+        for (int i = 0; i <= k; i++) _prefixModP[i] = (ulong)(_prefixProducts[i] % p);
+        _garnerInv = new uint[k][];
+        for (int i = 0; i < k; i++)
+        {
+            _garnerInv[i] = new uint[i];
+            var qi = _primes[i];
+            for (int j = 0; j < i; j++)
+                _garnerInv[i][j] = qi.ToMont(qi.PowMod(_primes[j].Q % qi.Q, qi.Q - 2));
+        }
+    }
+
+    /// <summary>The modulus p.</summary>
+    public ulong Modulus => _mod.P;
+
+    /// <summary>Largest supported transform length.</summary>
+    public static int MaxLength => 1 << NttPrime.MaxLog;
+
+    private static uint FindPrimitiveRoot(uint p)
+    {
+        ulong n = p - 1;
+        var factors = new List<ulong>();
+        ulong m = n;
+        for (ulong f = 2; f * f <= m; f++)
+            if (m % f == 0) { factors.Add(f); while (m % f == 0) m /= f; }
+        if (m > 1) factors.Add(m);
+        for (uint g = 2; g < p; g++)
+        {
+            bool ok = true;
+            foreach (var f in factors)
+                if (BigInteger.ModPow(g, n / f, p).IsOne) { ok = false; break; }
+            if (ok) return g;
+        }
+        return 0;
+    }
+
+    /// <summary>Number of transform primes needed so that output coefficients made of at most
+    /// <paramref name="terms"/> coefficient products (each ≤ (p − 1)²) are recovered exactly.</summary>
+    public int PrimesFor(long terms)
+    {
+        if (_direct) return 1;
+        var bound = new BigInteger(terms) * (_mod.P - 1) * (_mod.P - 1);
+        for (int k = 1; k <= _primes.Length; k++)
+            if (_prefixProducts[k] > bound) return k;
+        throw new ArgumentOutOfRangeException(nameof(terms), terms, "product too long for the transform primes");
+    }
+
+    /// <summary>Smallest power of two ≥ n.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static int TransformLength(int n) => n <= 1 ? 1 : (int)BitOperations.RoundUpToPowerOf2((uint)n);
+
+    /// <summary>The full product a·b into dst (length la + lb − 1), both operands non-empty.</summary>
+    public void Multiply(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
+    {
+        int n = a.Length + b.Length - 1;
+        int len = TransformLength(n);
+        if (len > MaxLength) { MultiplyChunked(a, b, dst); return; }
+        int k = PrimesFor(Math.Min(a.Length, b.Length));
+        bool square = a.Length == b.Length && Unsafe.AreSame(ref Unsafe.AsRef(in a[0]), ref Unsafe.AsRef(in b[0]));
+        using var fa = Transform(a, len, k);
+        if (square) fa.MultiplyPointwise(fa);
+        else
+        {
+            using var fb = Transform(b, len, k);
+            fa.MultiplyPointwise(fb);
+        }
+        fa.InverseTo(dst[..n]);
+    }
+
+    /// <summary>The cyclic product a·b mod (x^len − 1), len a power of two, into dst (length len).</summary>
+    public void MultiplyCyclic(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int len, Span<ulong> dst)
+    {
+        int k = PrimesFor(Math.Min(Math.Min(a.Length, b.Length), len));
+        using var fa = TransformWrapped(a, len, k);
+        using var fb = TransformWrapped(b, len, k);
+        fa.MultiplyPointwise(fb);
+        fa.InverseTo(dst[..len]);
+    }
+
+    private void MultiplyChunked(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
+    {
+        // Beyond the largest transform: split both operands into blocks of half the maximal length.
+        int block = MaxLength / 2;
+        dst.Clear();
+        var tmp = new ulong[2 * block - 1];
+        for (int i = 0; i < a.Length; i += block)
+        {
+            var ai = a.Slice(i, Math.Min(block, a.Length - i));
+            for (int j = 0; j < b.Length; j += block)
+            {
+                var bj = b.Slice(j, Math.Min(block, b.Length - j));
+                var t = tmp.AsSpan(0, ai.Length + bj.Length - 1);
+                Multiply(ai, bj, t);
+                var d = dst.Slice(i + j, t.Length);
+                for (int r = 0; r < t.Length; r++) d[r] = _mod.Add(d[r], t[r]);
+            }
+        }
+    }
+
+    /// <summary>Forward transforms of <paramref name="poly"/> (zero-padded) modulo the first
+    /// <paramref name="k"/> primes at length <paramref name="len"/>.</summary>
+    public Transformed Transform(ReadOnlySpan<ulong> poly, int len, int k)
+    {
+        if (poly.Length > len) throw new ArgumentException("polynomial longer than the transform", nameof(poly));
+        var t = new Transformed(this, len, k);
+        for (int i = 0; i < k; i++)
+        {
+            var pr = _primes[i];
+            pr.EnsureTables(BitOperations.Log2((uint)len));
+            var s = t.Row(i);
+            pr.Load(poly, s, _small);
+            pr.Forward(s);
+        }
+        return t;
+    }
+
+    /// <summary>An uninitialised transform buffer (for accumulating pointwise products).</summary>
+    public Transformed Allocate(int len, int k) => new(this, len, k);
+
+    /// <summary>Forward transforms of <paramref name="poly"/> reduced mod x^len − 1 (folded).</summary>
+    public Transformed TransformWrapped(ReadOnlySpan<ulong> poly, int len, int k)
+    {
+        if (poly.Length <= len) return Transform(poly, len, k);
+        var folded = ArrayPool<ulong>.Shared.Rent(len);
+        try
+        {
+            var f = folded.AsSpan(0, len);
+            poly[..len].CopyTo(f);
+            for (int i = len; i < poly.Length; i += len)
+            {
+                var part = poly.Slice(i, Math.Min(len, poly.Length - i));
+                for (int j = 0; j < part.Length; j++) f[j] = _mod.Add(f[j], part[j]);
+            }
+            return Transform(f, len, k);
+        }
+        finally { ArrayPool<ulong>.Shared.Return(folded); }
+    }
+
+    /// <summary>A polynomial transformed modulo k primes at one length; rows are pooled arrays,
+    /// returned by <see cref="Dispose"/>.</summary>
+    internal sealed class Transformed : IDisposable
+    {
+        private readonly NttMultiplier _owner;
+        private uint[]? _data;
+        public readonly int Length;
+        public readonly int Primes;
+
+        public Transformed(NttMultiplier owner, int len, int k)
+        {
+            _owner = owner;
+            Length = len;
+            Primes = k;
+            _data = ArrayPool<uint>.Shared.Rent(len * k);
+        }
+
+        public Span<uint> Row(int i) => _data.AsSpan(i * Length, Length);
+
+        /// <summary>this ← this ∘ other (pointwise, Montgomery factor R⁻¹ accounted for in the inverse).</summary>
+        public void MultiplyPointwise(Transformed other)
+        {
+            Check(other);
+            for (int i = 0; i < Primes; i++)
+                _owner._primes[i].PointwiseMontMul(Row(i), other.Row(i));
+        }
+
+        /// <summary>this ← a ∘ b.</summary>
+        public void SetProduct(Transformed a, Transformed b)
+        {
+            Check(a); Check(b);
+            for (int i = 0; i < Primes; i++)
+                _owner._primes[i].PointwiseMontMulTo(Row(i), a.Row(i), b.Row(i));
+        }
+
+        /// <summary>this ← this + a ∘ b.</summary>
+        public void AddProduct(Transformed a, Transformed b)
+        {
+            Check(a); Check(b);
+            for (int i = 0; i < Primes; i++)
+                _owner._primes[i].PointwiseMontMulAdd(Row(i), a.Row(i), b.Row(i));
+        }
+
+        private void Check(Transformed o)
+        {
+            if (o.Length != Length || o.Primes != Primes) throw new InvalidOperationException("transform shapes differ");
+        }
+
+        /// <summary>Inverse transforms (destroying this buffer) and remainders mod p of the first
+        /// dst.Length coefficients of the (cyclic) product.</summary>
+        public void InverseTo(Span<ulong> dst)
+        {
+            for (int i = 0; i < Primes; i++) _owner._primes[i].Inverse(Row(i));
+            _owner.Garner(this, dst);
+        }
+
+        public void Dispose()
+        {
+            if (_data is not null) ArrayPool<uint>.Shared.Return(_data);
+            _data = null;
+        }
+    }
+
+    /// <summary>Recombines inverse-transformed rows (still carrying the factor len·R⁻¹) to residues mod p.</summary>
+    internal void Garner(Transformed t, Span<ulong> dst)
+    {
+        int k = t.Primes, len = t.Length, count = Math.Min(dst.Length, len);
+        Span<uint> scale = stackalloc uint[k];
+        for (int i = 0; i < k; i++)
+        {
+            var pr = _primes[i];
+            uint linv = pr.PowMod((uint)(len % pr.Q), pr.Q - 2);
+            scale[i] = pr.ToMont(pr.ToMont(linv));   // len⁻¹·R² : MontMul(x, ·) = x·len⁻¹·R
+        }
+        var mod = _mod;
+        if (k == 1)
+        {
+            var r0 = t.Row(0);
+            var p0 = _primes[0];
+            uint s0 = scale[0];
+            if (_direct)
+                for (int j = 0; j < count; j++) dst[j] = p0.MontMul(r0[j], s0);
+            else
+                for (int j = 0; j < count; j++) dst[j] = mod.Reduce64(p0.MontMul(r0[j], s0));
+        }
+        else if (k == 2 && _small)
+        {
+            var r0 = t.Row(0); var r1 = t.Row(1);
+            var p0 = _primes[0]; var p1 = _primes[1];
+            uint s0 = scale[0], s1 = scale[1], i10 = _garnerInv[1][0];
+            ulong c1 = _prefixModP[1];
+            for (int j = 0; j < count; j++)
+            {
+                uint t0 = p0.MontMul(r0[j], s0);
+                uint x1 = p1.MontMul(r1[j], s1);
+                uint t1 = p1.MontMul(p1.Sub(x1, p1.Fold(t0)), i10);
+                dst[j] = mod.Reduce64(t0 + t1 * c1);
+            }
+        }
+        else if (k == 3 && _small)
+        {
+            var r0 = t.Row(0); var r1 = t.Row(1); var r2 = t.Row(2);
+            var p0 = _primes[0]; var p1 = _primes[1]; var p2 = _primes[2];
+            uint s0 = scale[0], s1 = scale[1], s2 = scale[2];
+            uint i10 = _garnerInv[1][0], i20 = _garnerInv[2][0], i21 = _garnerInv[2][1];
+            uint q1 = p1.Q, q2 = p2.Q;
+            ulong c1 = _prefixModP[1], c2 = _prefixModP[2];
+            for (int j = 0; j < count; j++)
+            {
+                uint t0 = p0.MontMul(r0[j], s0);
+                uint x1 = p1.MontMul(r1[j], s1);
+                uint t1 = p1.MontMul(p1.Sub(x1, p1.Fold(t0)), i10);
+                uint x2 = p2.MontMul(r2[j], s2);
+                x2 = p2.MontMul(p2.Sub(x2, p2.Fold(t0)), i20);
+                uint t2 = p2.MontMul(p2.Sub(x2, p2.Fold(t1)), i21);
+                dst[j] = mod.Reduce64(t0 + t1 * c1 + t2 * c2);
+            }
+        }
+        else
+        {
+            Span<uint> digits = stackalloc uint[k];
+            for (int j = 0; j < count; j++)
+            {
+                ulong hi = 0, lo = 0;
+                for (int i = 0; i < k; i++)
+                {
+                    var pr = _primes[i];
+                    uint x = pr.MontMul(t.Row(i)[j], scale[i]);
+                    var inv = _garnerInv[i];
+                    for (int m = 0; m < i; m++)
+                    {
+                        x = pr.MontMul(pr.Sub(x, pr.Fold(digits[m])), inv[m]);
+                    }
+                    digits[i] = x;
+                    ulong ph = Math.BigMul(x, _prefixModP[i], out ulong pl);
+                    lo += pl;
+                    hi += ph + (lo < pl ? 1UL : 0UL);
+                }
+                dst[j] = mod.Reduce128(hi, lo);
+            }
+        }
+        if (dst.Length > count) dst[count..].Clear();
+    }
+}

@@ -47,8 +47,10 @@ public abstract class W3WorkloadBase : IWorkload
         var q1 = PolynomialModP.One(f);
         bool a = Hietarinta, b = !Hietarinta;
         var sw = Stopwatch.StartNew();
+        double tMul = 0, tGcd = 0, tDiv = 0;
         for (int n = 1; n < nmax; n++)
         {
+            double s0 = sw.Elapsed.TotalSeconds;
             var t1 = q1.Square();
             var num = t1 * q1;
             if (b) num += t1 * p1;
@@ -58,15 +60,19 @@ public abstract class W3WorkloadBase : IWorkload
             var den = t1 * q1;
             num -= den * p0;
             den *= q0;
+            double s1 = sw.Elapsed.TotalSeconds;
             var g = PolynomialModP.Gcd(num, den);
+            double s2 = sw.Elapsed.TotalSeconds;
             var p2 = num.DivideExact(g);
             var q2 = den.DivideExact(g);
             ulong inv = f.Inverse(q2.LeadingCoefficient);
             p2 = p2.Scale(inv);
             q2 = q2.Scale(inv);
             (p0, q0, p1, q1) = (p1, q1, p2, q2);
+            double s3 = sw.Elapsed.TotalSeconds;
+            tMul += s1 - s0; tGcd += s2 - s1; tDiv += s3 - s2;
             if (verbose)
-                Console.WriteLine($"  n={n + 1} degnum={p1.Degree} degden={q1.Degree} seconds={Timing.Seconds(sw.Elapsed.TotalSeconds)}");
+                Console.WriteLine($"  n={n + 1} degnum={p1.Degree} degden={q1.Degree} seconds={Timing.Seconds(s3)} (products {tMul:F3}, gcd {tGcd:F3}, divisions {tDiv:F3})");
         }
         return (p1.Degree, sw.Elapsed.TotalSeconds);
     }

@@ -52,6 +52,7 @@ internal static class UnivariateText
                 haveCoef = true;
                 SkipSpaces();
                 if (i < n && text[i] == '*') { i++; SkipSpaces(); if (!StartsVariable()) throw Error($"expected '{variable}' after '*'"); }
+                else if (StartsVariable()) throw Error("expected '*' between a coefficient and the variable");
             }
             int exponent = 0;
             if (StartsVariable())

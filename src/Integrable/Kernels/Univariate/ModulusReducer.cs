@@ -15,6 +15,10 @@ internal readonly struct ModulusReducer
     private readonly ulong _m64;      // floor((2^64 - 1) / p), for any 64-bit x
     private readonly ulong _r64;      // 2^64 mod p
 
+    /// <summary>How many products (each ≤ (p − 1)²) a 128-bit accumulator can take before it must be
+    /// folded with <see cref="Reduce128"/>: ⌊(2^128 − 1)/(p − 1)²⌋, capped at int.MaxValue (16 for p ≈ 2^62).</summary>
+    public readonly int DelayedTerms;
+
     public ModulusReducer(ulong p)
     {
         if (p < 2 || p >= PrimeField.ModulusLimit)
@@ -24,6 +28,9 @@ internal readonly struct ModulusReducer
         _barrett = (ulong)((UInt128.One << (2 * _k)) / p);
         _m64 = ulong.MaxValue / p;
         _r64 = (ulong)(((UInt128)1 << 64) % p);
+        var sq = (UInt128)(p - 1) * (p - 1);
+        var terms = sq == 0 ? UInt128.MaxValue : UInt128.MaxValue / sq;
+        DelayedTerms = terms > int.MaxValue ? int.MaxValue : (int)terms;
     }
 
     /// <summary>x mod p for x = hi·2^64 + lo &lt; p².</summary>

@@ -30,11 +30,13 @@ internal static partial class PolyMod
             // Σ_{j=1}^{min(lb−1, lq−1−k)} q[k+j]·b[lb−1−j], subtracted from a[k+lb−1].
             int jmax = Math.Min(lb - 1, lq - 1 - k);
             ulong hi = 0, lo = 0;
+            int cnt = 0, lim = mod.DelayedTerms;
             for (int j = 1; j <= jmax; j++)
             {
                 ulong ph = Math.BigMul(q[k + j], b[lb - 1 - j], out ulong pl);
                 lo += pl;
                 hi += ph + (lo < pl ? 1UL : 0UL);
+                if (++cnt == lim) { lo = mod.Reduce128(hi, lo); hi = 0; cnt = 1; }
             }
             ulong s = jmax == 0 ? 0 : mod.Reduce128(hi, lo);
             q[k] = mod.Mul(mod.Sub(a[k + lb - 1], s), inv);
@@ -53,11 +55,13 @@ internal static partial class PolyMod
         {
             int j0 = Math.Max(0, i - lb + 1), j1 = Math.Min(i, lq - 1);
             ulong hi = 0, lo = 0;
+            int cnt = 0, lim = mod.DelayedTerms;
             for (int j = j0; j <= j1; j++)
             {
                 ulong ph = Math.BigMul(q[j], b[i - j], out ulong pl);
                 lo += pl;
                 hi += ph + (lo < pl ? 1UL : 0UL);
+                if (++cnt == lim) { lo = mod.Reduce128(hi, lo); hi = 0; cnt = 1; }
             }
             ulong ai = i < a.Length ? a[i] : 0;
             r[i] = mod.Sub(ai, mod.Reduce128(hi, lo));
@@ -71,7 +75,8 @@ internal static partial class PolyMod
     public static (ulong[] Quotient, ulong[] Remainder) DivRemNewton(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         int la = a.Length, lb = b.Length, lq = la - lb + 1;
-        var revB = Reverse(b, Math.Min(lb, lq));
+        int n = Math.Min(lb, lq);
+        var revB = Reverse(b[(lb - n)..], n);            // rev(b) mod x^n: the top n coefficients, reversed
         var inv = InverseSeries(ctx, revB, lq);
         var q = QuotientFromInverse(ctx, a, lb, inv);
         var r = RemainderWrapped(ctx, a, b, q);
@@ -170,12 +175,14 @@ internal static partial class PolyMod
         for (int i = 1; i < n; i++)
         {
             ulong hi = 0, lo = 0;
+            int cnt = 0, lim = mod.DelayedTerms;
             int jmax = Math.Min(i, f.Length - 1);
             for (int j = 1; j <= jmax; j++)
             {
                 ulong ph = Math.BigMul(f[j], g[i - j], out ulong pl);
                 lo += pl;
                 hi += ph + (lo < pl ? 1UL : 0UL);
+                if (++cnt == lim) { lo = mod.Reduce128(hi, lo); hi = 0; cnt = 1; }
             }
             g[i] = mod.Neg(mod.Mul(mod.Reduce128(hi, lo), inv));
         }

@@ -59,11 +59,13 @@ internal static partial class PolyMod
         {
             int i0 = Math.Max(0, k - lb + 1), i1 = Math.Min(k, la - 1);
             ulong hi = 0, lo = 0;
+            int cnt = 0, lim = mod.DelayedTerms;
             for (int i = i0; i <= i1; i++)
             {
                 ulong ph = Math.BigMul(a[i], b[k - i], out ulong pl);
                 lo += pl;
                 hi += ph + (lo < pl ? 1UL : 0UL);
+                if (++cnt == lim) { lo = mod.Reduce128(hi, lo); hi = 0; cnt = 1; }
             }
             dst[k] = mod.Reduce128(hi, lo);
         }

@@ -19,11 +19,43 @@ public sealed class UniProbeWorkload : IWorkload
         ulong p = args.Length > 1 ? ulong.Parse(args[1]) : 2147483647;
         var ctx = PolyModContext.For(new PrimeField(p));
         var rng = new Random(1);
+        if (args.Length > 2 && args[2] == "thresholds")
+        {
+            var sb = new System.Text.StringBuilder();
+            foreach (int n in new[] { 8, 12, 16, 24, 32, 48, 64, 96, 128, 192, 256, 384, 512, 768, 1024 })
+            {
+                foreach (int m in new[] { n, n / 4 + 1 })
+                {
+                    var x = Rand(rng, n - 1, p); var y = Rand(rng, m - 1, p);
+                    var dst = new ulong[n + m - 1];
+                    int reps = Math.Max(3, 20_000_000 / (n * m + 1000));
+                    double Cpu(Action act) { act(); var c0 = Process.GetCurrentProcess().TotalProcessorTime; for (int r = 0; r < reps; r++) act(); return (Process.GetCurrentProcess().TotalProcessorTime - c0).TotalSeconds / reps * 1e6; }
+                    double ts = Cpu(() => PolyMod.MultiplySchoolbook(ctx.Mod, x, y, dst));
+                    double tk = Cpu(() => PolyMod.MultiplyKaratsuba(ctx.Mod, x, y, dst));
+                    double tn = Cpu(() => ctx.Ntt.Multiply(x, y, dst));
+                    sb.AppendLine($"n={n} m={m} school={ts:F1}us kara={tk:F1}us ntt={tn:F1}us");
+                }
+            }
+            return sb.ToString();
+        }
         if (args.Length > 2 && args[2] == "matvec")
         {
             var M = new PolyMatrix(Rand(rng, deg / 4, p), Rand(rng, deg / 4, p), Rand(rng, deg / 4, p), Rand(rng, deg / 4, p));
             var x = Rand(rng, deg / 2, p); var y = Rand(rng, deg / 2, p);
             double tmv = Timing.Median(5, () => PolyMod.MatVec(ctx, M, x, y));
+            var cpuA = Process.GetCurrentProcess().TotalProcessorTime;
+            for (int rr = 0; rr < 5; rr++) PolyMod.MatVec(ctx, M, x, y);
+            double cpuMv = (Process.GetCurrentProcess().TotalProcessorTime - cpuA).TotalSeconds / 5;
+            cpuA = Process.GetCurrentProcess().TotalProcessorTime;
+            int lenq = NttMultiplier.TransformLength(deg / 4 + deg / 2);
+            for (int rr = 0; rr < 5; rr++) { using var tq = ctx.Ntt.Transform(x, lenq, 3); }
+            double cpuT = (Process.GetCurrentProcess().TotalProcessorTime - cpuA).TotalSeconds / 5;
+            cpuA = Process.GetCurrentProcess().TotalProcessorTime;
+            var tq2 = ctx.Ntt.Transform(x, lenq, 3);
+            var outc = new ulong[lenq];
+            for (int rr = 0; rr < 5; rr++) { ctx.Ntt.Garner(tq2, outc); }
+            double cpuG = (Process.GetCurrentProcess().TotalProcessorTime - cpuA).TotalSeconds / 5;
+            Console.WriteLine($"cpu matvec={cpuMv:F4} transform3(L={lenq})={cpuT:F4} garner={cpuG:F4}");
             double tmm = Timing.Median(5, () => PolyMod.MatMul(ctx, M, M));
             var c = new ulong[deg + 1];
             double tm = Timing.Median(5, () => ctx.Ntt.Multiply(x, y, c));

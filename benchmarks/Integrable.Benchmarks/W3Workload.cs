@@ -46,6 +46,7 @@ public abstract class W3WorkloadBase : IWorkload
         var q0 = PolynomialModP.One(f);
         var q1 = PolynomialModP.One(f);
         bool a = Hietarinta, b = !Hietarinta;
+        var cpu0 = Process.GetCurrentProcess().TotalProcessorTime;
         var sw = Stopwatch.StartNew();
         double tMul = 0, tGcd = 0, tDiv = 0;
         for (int n = 1; n < nmax; n++)
@@ -72,7 +73,7 @@ public abstract class W3WorkloadBase : IWorkload
             double s3 = sw.Elapsed.TotalSeconds;
             tMul += s1 - s0; tGcd += s2 - s1; tDiv += s3 - s2;
             if (verbose)
-                Console.WriteLine($"  n={n + 1} degnum={p1.Degree} degden={q1.Degree} seconds={Timing.Seconds(s3)} (products {tMul:F3}, gcd {tGcd:F3}, divisions {tDiv:F3})");
+                Console.WriteLine($"  n={n + 1} degnum={p1.Degree} degden={q1.Degree} seconds={Timing.Seconds(s3)} cpu={(Process.GetCurrentProcess().TotalProcessorTime - cpu0).TotalSeconds:F3} (products {tMul:F3}, gcd {tGcd:F3}, divisions {tDiv:F3})");
         }
         return (p1.Degree, sw.Elapsed.TotalSeconds);
     }

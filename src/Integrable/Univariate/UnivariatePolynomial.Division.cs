@@ -141,7 +141,6 @@ public sealed partial class UnivariatePolynomial
             return (g, Constant(a.LeadingCoefficient.Inverse()), Zero);
         }
         var acc = new MultiModular(ls + lt);
-        (UnivariatePolynomial S, UnivariatePolynomial T)? previous = null;
         for (int i = 0; ; i++)
         {
             var field = new PrimeField(Primes.Large(i));
@@ -155,12 +154,13 @@ public sealed partial class UnivariatePolynomial
             sp.Coefficients.CopyTo(img);
             tp.Coefficients.CopyTo(img.AsSpan(ls));
             acc.Add(field.Modulus, img);
+            // Try a reconstruction when the number of primes doubles, or when the images stopped changing.
+            int k = acc.Count;
+            if (!acc.Stable && (k & (k - 1)) != 0) continue;
             if (!TryReconstructAll(acc, out var coeffs)) continue;
             var s = FromCoefficients(coeffs.AsSpan(0, ls));
             var t = FromCoefficients(coeffs.AsSpan(ls));
-            if (previous is { } prev && prev.S.Equals(s) && prev.T.Equals(t) && (s * a + t * b).Equals(g))
-                return (g, s, t);
-            previous = (s, t);
+            if ((s * a + t * b).Equals(g)) return (g, s, t);
         }
     }
 

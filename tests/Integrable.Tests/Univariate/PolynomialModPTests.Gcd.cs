@@ -46,7 +46,7 @@ public class PolynomialModPGcdTests
     [MemberData(nameof(ModuliData), MemberType = typeof(UnivariateTestSupport))]
     public void Gcd_Laws_HalfGcdForcedLow(ulong p)
     {
-        using var _ = new ThresholdScope(halfGcd: 4, halfGcdBase: 4, ntt: 16, newton: 8);
+        using var _ = new ThresholdScope(halfGcd: 4, halfGcdBase: 4, ntt: 1, transformCostFactor: 0, matrixTransform: 1, newton: 8);
         CheckGcdLaws(p, 32, 160);
     }
 

@@ -18,12 +18,16 @@ internal sealed class ThresholdScope : IDisposable
     private readonly int _kara = UnivariateThresholds.Karatsuba, _ntt = UnivariateThresholds.Ntt,
         _newton = UnivariateThresholds.NewtonDivision, _hgcd = UnivariateThresholds.HalfGcd,
         _hbase = UnivariateThresholds.HalfGcdBase, _qmul = UnivariatePolynomial.ModularMultiplyThreshold,
-        _zmul = IntegerPoly.ModularProductThreshold;
+        _zmul = IntegerPoly.ModularProductThreshold, _mat = UnivariateThresholds.MatrixTransform;
+    private readonly double _factor = UnivariateThresholds.TransformCostFactor;
     private readonly bool _vector = NttPrime.AllowVector;
 
     public ThresholdScope(int? karatsuba = null, int? ntt = null, int? newton = null, int? halfGcd = null,
-        int? halfGcdBase = null, bool? vector = null, int? rationalModular = null, int? integerModular = null)
+        int? halfGcdBase = null, bool? vector = null, int? rationalModular = null, int? integerModular = null,
+        int? matrixTransform = null, double? transformCostFactor = null)
     {
+        if (matrixTransform is int mt) UnivariateThresholds.MatrixTransform = mt;
+        if (transformCostFactor is double tf) UnivariateThresholds.TransformCostFactor = tf;
         if (karatsuba is int k) UnivariateThresholds.Karatsuba = k;
         if (ntt is int n) UnivariateThresholds.Ntt = n;
         if (newton is int d) UnivariateThresholds.NewtonDivision = d;
@@ -44,6 +48,8 @@ internal sealed class ThresholdScope : IDisposable
         NttPrime.AllowVector = _vector;
         UnivariatePolynomial.ModularMultiplyThreshold = _qmul;
         IntegerPoly.ModularProductThreshold = _zmul;
+        UnivariateThresholds.MatrixTransform = _mat;
+        UnivariateThresholds.TransformCostFactor = _factor;
     }
 }
 

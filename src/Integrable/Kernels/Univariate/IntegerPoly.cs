@@ -172,7 +172,6 @@ internal static class IntegerPoly
         var bound = (BigInteger.One << (lq - 1)) * Norm2Ceiling(a);
         var target = 2 * bound + 1;
         var acc = new MultiModular(lq);
-        BigInteger[]? previous = null;
         for (int i = 0; ; i++)
         {
             ulong p = Primes.Large(i);
@@ -181,16 +180,13 @@ internal static class IntegerPoly
             var (qp, rp) = PolyMod.DivRem(ctx, Reduce(a, p), Reduce(b, p));
             if (rp.Length != 0) return false;
             acc.Add(p, qp);
-            var candidate = acc.Reconstruct();
-            bool stable = previous is not null && candidate.AsSpan().SequenceEqual(previous);
-            if (stable || acc.Modulus > target)
+            if (acc.Stable || acc.Modulus > target)
             {
-                var c = Trim(candidate);
+                var c = Trim(acc.Reconstruct());
                 var prod = Multiply(c, b);
                 if (prod.AsSpan().SequenceEqual(a)) { quotient = c; return true; }
                 if (acc.Modulus > target) return false;
             }
-            previous = candidate;
         }
     }
 
@@ -204,7 +200,6 @@ internal static class IntegerPoly
         var gamma = BigInteger.GreatestCommonDivisor(a[^1], b[^1]);
         MultiModular? acc = null;
         int degree = int.MaxValue;
-        BigInteger[]? previous = null;
         for (int i = 0; ; i++)
         {
             ulong p = Primes.Large(i);
@@ -214,16 +209,14 @@ internal static class IntegerPoly
             int d = g.Length - 1;
             if (d == 0) return [BigInteger.One];
             if (d > degree) continue;                        // unlucky prime
-            if (d < degree) { degree = d; acc = new MultiModular(d + 1); previous = null; }
+            if (d < degree) { degree = d; acc = new MultiModular(d + 1); }
             var scaled = PolyMod.Scale(ctx.Mod, g, Residue(gamma, p));
             acc!.Add(p, scaled);
-            var candidate = acc.Reconstruct();
-            if (previous is not null && candidate.AsSpan().SequenceEqual(previous))
+            if (acc.Stable)
             {
-                var h = PrimitivePositive(Trim(candidate));
+                var h = PrimitivePositive(Trim(acc.Reconstruct()));
                 if (h.Length == degree + 1 && TryDivideExact(a, h, out _) && TryDivideExact(b, h, out _)) return h;
             }
-            previous = candidate;
         }
     }
 
@@ -275,61 +268,52 @@ internal static class IntegerPoly
     }
 }
 
-/// <summary>Chinese remaindering of a vector of residues over several word primes (Garner's mixed-radix
-/// form, symmetric representatives).</summary>
+/// <summary>Incremental Chinese remaindering of a vector of residues over several word primes: the
+/// symmetric representatives (in (−M/2, M/2]) are updated in O(length) big-integer word operations per
+/// new prime, and <see cref="Stable"/> tells whether the last prime changed nothing.</summary>
 internal sealed class MultiModular
 {
-    private readonly int _count;
-    private readonly List<ulong> _primes = new();
-    private readonly List<ulong[]> _images = new();
+    private readonly BigInteger[] _values;
 
-    public MultiModular(int count) => _count = count;
+    public MultiModular(int count)
+    {
+        _values = new BigInteger[count];
+    }
 
     /// <summary>Product of the primes added so far.</summary>
     public BigInteger Modulus { get; private set; } = BigInteger.One;
 
-    /// <summary>Adds residues modulo a new prime (entries beyond the array are zero).</summary>
+    /// <summary>Number of primes added.</summary>
+    public int Count { get; private set; }
+
+    /// <summary>True when the last prime added left every value unchanged (and at least two were added).</summary>
+    public bool Stable { get; private set; }
+
+    /// <summary>Adds residues modulo a new prime (entries beyond the span are zero).</summary>
     public void Add(ulong p, ReadOnlySpan<ulong> residues)
     {
-        var img = new ulong[_count];
-        residues[..Math.Min(residues.Length, _count)].CopyTo(img);
-        _primes.Add(p);
-        _images.Add(img);
-        Modulus *= p;
+        var mod = new ModulusReducer(p);
+        ulong mInv = mod.Inverse(IntegerPoly.Residue(Modulus, p));
+        var newModulus = Modulus * p;
+        var half = newModulus >> 1;
+        bool changed = false;
+        for (int c = 0; c < _values.Length; c++)
+        {
+            ulong r = c < residues.Length ? residues[c] : 0;
+            var old = _values[c];
+            ulong oldModP = IntegerPoly.Residue(old, p);
+            if (oldModP == r) continue;
+            ulong t = mod.Mul(mod.Sub(r, oldModP), mInv);
+            var v = old + Modulus * t;
+            if (v > half) v -= newModulus;
+            _values[c] = v;
+            changed = true;
+        }
+        Modulus = newModulus;
+        Count++;
+        Stable = !changed && Count >= 2;
     }
 
-    /// <summary>The symmetric integers (in (−M/2, M/2]) with the given residues.</summary>
-    public BigInteger[] Reconstruct()
-    {
-        int k = _primes.Count;
-        var mods = new ModulusReducer[k];
-        for (int i = 0; i < k; i++) mods[i] = new ModulusReducer(_primes[i]);
-        // inv[i][j] = p_j^{-1} mod p_i
-        var inv = new ulong[k][];
-        for (int i = 0; i < k; i++)
-        {
-            inv[i] = new ulong[i];
-            for (int j = 0; j < i; j++) inv[i][j] = mods[i].Inverse(_primes[j] % _primes[i]);
-        }
-        var half = Modulus >> 1;
-        var result = new BigInteger[_count];
-        var digits = new ulong[k];
-        for (int c = 0; c < _count; c++)
-        {
-            for (int i = 0; i < k; i++)
-            {
-                ulong x = _images[i][c];
-                for (int j = 0; j < i; j++)
-                {
-                    ulong d = digits[j] % _primes[i];
-                    x = mods[i].Mul(mods[i].Sub(x, d), inv[i][j]);
-                }
-                digits[i] = x;
-            }
-            BigInteger v = digits[k - 1];
-            for (int j = k - 2; j >= 0; j--) v = v * _primes[j] + digits[j];
-            result[c] = v > half ? v - Modulus : v;
-        }
-        return result;
-    }
+    /// <summary>The current symmetric representatives (a copy).</summary>
+    public BigInteger[] Reconstruct() => (BigInteger[])_values.Clone();
 }

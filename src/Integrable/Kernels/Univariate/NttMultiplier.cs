@@ -1,6 +1,8 @@
 using System.Buffers;
 using System.Numerics;
 using System.Runtime.CompilerServices;
+using System.Runtime.Intrinsics;
+using System.Runtime.Intrinsics.X86;
 
 namespace Integrable.Kernels.Univariate;
 
@@ -59,6 +61,13 @@ internal sealed class NttMultiplier
         _prefixProducts[0] = BigInteger.One;
         for (int i = 0; i < k; i++) _prefixProducts[i + 1] = _prefixProducts[i] * _primes[i].Q;
         for (int i = 0; i <= k; i++) _prefixModP[i] = (ulong)(_prefixProducts[i] % p);
+        _maxTerms = new long[k + 1];
+        var sq = new BigInteger(p - 1) * (p - 1);
+        for (int i = 1; i <= k; i++)
+        {
+            var t = sq.IsZero ? new BigInteger(long.MaxValue) : (_prefixProducts[i] - 1) / sq;
+            _maxTerms[i] = t > long.MaxValue ? long.MaxValue : (long)t;
+        }
         _garnerInv = new uint[k][];
         for (int i = 0; i < k; i++)
         {
@@ -98,11 +107,13 @@ internal sealed class NttMultiplier
     public int PrimesFor(long terms)
     {
         if (_direct) return 1;
-        var bound = new BigInteger(terms) * (_mod.P - 1) * (_mod.P - 1);
         for (int k = 1; k <= _primes.Length; k++)
-            if (_prefixProducts[k] > bound) return k;
+            if (terms <= _maxTerms[k]) return k;
         throw new ArgumentOutOfRangeException(nameof(terms), terms, "product too long for the transform primes");
     }
+
+    // _maxTerms[k] = largest number of summed coefficient products recoverable with k primes.
+    private long[] _maxTerms = [];
 
     /// <summary>Smallest power of two ≥ n.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -258,6 +269,46 @@ internal sealed class NttMultiplier
         }
     }
 
+    /// <summary>Vectorised Garner digits for three primes (eight coefficients at a time); the final
+    /// t0 + t1·q0 + t2·q0·q1 mod p (p &lt; 2^32, sum &lt; 2^64) stays scalar. Returns the count done.</summary>
+    private unsafe int GarnerThreeVector(Span<uint> r0, Span<uint> r1, Span<uint> r2, Span<ulong> dst, int count, uint s0, uint s1, uint s2)
+    {
+        var p0 = _primes[0]; var p1 = _primes[1]; var p2 = _primes[2];
+        var q0 = Vector256.Create(p0.Q); var q1 = Vector256.Create(p1.Q); var q2 = Vector256.Create(p2.Q);
+        var qi0 = Vector256.Create(p0.QInv); var qi1 = Vector256.Create(p1.QInv); var qi2 = Vector256.Create(p2.QInv);
+        var vs0 = Vector256.Create(s0); var vs1 = Vector256.Create(s1); var vs2 = Vector256.Create(s2);
+        var i10 = Vector256.Create(_garnerInv[1][0]);
+        var i20 = Vector256.Create(_garnerInv[2][0]);
+        var i21 = Vector256.Create(_garnerInv[2][1]);
+        ulong c1 = _prefixModP[1], c2 = _prefixModP[2];
+        var mod = _mod;
+        uint* t0s = stackalloc uint[8];
+        uint* t1s = stackalloc uint[8];
+        uint* t2s = stackalloc uint[8];
+        int j = 0;
+        fixed (uint* a0 = r0)
+        fixed (uint* a1 = r1)
+        fixed (uint* a2 = r2)
+        {
+            for (; j + 8 <= count; j += 8)
+            {
+                var t0 = NttPrime.VMontMul(Avx.LoadVector256(a0 + j), vs0, q0, qi0);
+                var x1 = NttPrime.VMontMul(Avx.LoadVector256(a1 + j), vs1, q1, qi1);
+                var t0m1 = Avx2.Min(t0, Avx2.Subtract(t0, q1));                 // t0 mod q1 (t0 < 2·q1)
+                var t1 = NttPrime.VMontMul(NttPrime.VSub(x1, t0m1, q1), i10, q1, qi1);
+                var x2 = NttPrime.VMontMul(Avx.LoadVector256(a2 + j), vs2, q2, qi2);
+                var t0m2 = Avx2.Min(t0, Avx2.Subtract(t0, q2));
+                x2 = NttPrime.VMontMul(NttPrime.VSub(x2, t0m2, q2), i20, q2, qi2);
+                var t1m2 = Avx2.Min(t1, Avx2.Subtract(t1, q2));
+                var t2 = NttPrime.VMontMul(NttPrime.VSub(x2, t1m2, q2), i21, q2, qi2);
+                Avx.Store(t0s, t0); Avx.Store(t1s, t1); Avx.Store(t2s, t2);
+                for (int u = 0; u < 8; u++)
+                    dst[j + u] = mod.Reduce64(t0s[u] + t1s[u] * c1 + t2s[u] * c2);
+            }
+        }
+        return j;
+    }
+
     /// <summary>Recombines inverse-transformed rows (still carrying the factor len·R⁻¹) to residues mod p.</summary>
     internal void Garner(Transformed t, Span<ulong> dst)
     {
@@ -302,7 +353,10 @@ internal sealed class NttMultiplier
             uint i10 = _garnerInv[1][0], i20 = _garnerInv[2][0], i21 = _garnerInv[2][1];
             uint q1 = p1.Q, q2 = p2.Q;
             ulong c1 = _prefixModP[1], c2 = _prefixModP[2];
-            for (int j = 0; j < count; j++)
+            int j = 0;
+            if (System.Runtime.Intrinsics.X86.Avx2.IsSupported && NttPrime.AllowVector)
+                j = GarnerThreeVector(r0, r1, r2, dst, count, s0, s1, s2);
+            for (; j < count; j++)
             {
                 uint t0 = p0.MontMul(r0[j], s0);
                 uint x1 = p1.MontMul(r1[j], s1);

@@ -195,7 +195,7 @@ internal sealed class NttPrime
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static Vector256<uint> VMontMul(Vector256<uint> a, Vector256<uint> b, Vector256<uint> q, Vector256<uint> qinv)
+    internal static Vector256<uint> VMontMul(Vector256<uint> a, Vector256<uint> b, Vector256<uint> q, Vector256<uint> qinv)
     {
         Vector256<ulong> pe = Avx2.Multiply(a, b);
         Vector256<ulong> po = Avx2.Multiply(Avx2.ShiftRightLogical(a.AsUInt64(), 32).AsUInt32(), Avx2.ShiftRightLogical(b.AsUInt64(), 32).AsUInt32());
@@ -210,14 +210,14 @@ internal sealed class NttPrime
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static Vector256<uint> VAdd(Vector256<uint> a, Vector256<uint> b, Vector256<uint> q)
+    internal static Vector256<uint> VAdd(Vector256<uint> a, Vector256<uint> b, Vector256<uint> q)
     {
         Vector256<uint> s = Avx2.Add(a, b);
         return Avx2.Min(s, Avx2.Subtract(s, q));
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static Vector256<uint> VSub(Vector256<uint> a, Vector256<uint> b, Vector256<uint> q)
+    internal static Vector256<uint> VSub(Vector256<uint> a, Vector256<uint> b, Vector256<uint> q)
     {
         Vector256<uint> d = Avx2.Subtract(a, b);
         return Avx2.Min(d, Avx2.Add(d, q));

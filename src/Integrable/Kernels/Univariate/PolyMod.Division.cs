@@ -100,9 +100,9 @@ internal static partial class PolyMod
         int lb = b.Length;
         if (lb <= 1) return [];
         if (q.IsEmpty) return Trim(a[..Math.Min(a.Length, lb - 1)].ToArray());
-        if (Math.Min(q.Length, lb) < UnivariateThresholds.Ntt)
-            return RemainderFromQuotient(ctx.Mod, a, b, q);
         int len = NttMultiplier.TransformLength(lb - 1);
+        if (!TransformPays(ctx, Math.Max(q.Length, lb), Math.Min(q.Length, lb), len))
+            return RemainderFromQuotient(ctx.Mod, a, b, q);
         var qb = NewArray(len);
         ctx.Ntt.MultiplyCyclic(q, b, len, qb);
         // Fold a mod x^len − 1 as well; the difference is r (deg r < lb − 1 ≤ len).
@@ -145,9 +145,9 @@ internal static partial class PolyMod
         var fk2 = f[..Math.Min(f.Length, k2)];
         var gk = g.AsSpan(0, Math.Min(g.Length, k));
         ulong[] e;   // coefficients k … k2 − 1 of f·g
-        if (Math.Min(fk2.Length, gk.Length) >= UnivariateThresholds.Ntt)
+        int len = NttMultiplier.TransformLength(k2);
+        if (TransformPays(ctx, fk2.Length, gk.Length, len))
         {
-            int len = NttMultiplier.TransformLength(k2);
             var fg = NewArray(len);
             ctx.Ntt.MultiplyCyclic(fk2, gk, len, fg);   // wrap lands below k2 + k − 1 − len < k
             e = fg.AsSpan(k, k2 - k).ToArray();

@@ -23,8 +23,9 @@ internal static partial class PolyMod
     public static ulong[] GcdEuclid(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         if (a.Length < b.Length) (a, b) = (b, a);
-        while (b.Length > 0) (a, b) = (b, DivRemBasic(ctx.Mod, a, b).Remainder);
-        return a.Length == 0 ? [] : MakeMonic(ctx.Mod, a);
+        if (b.Length == 0) return a.Length == 0 ? [] : MakeMonic(ctx.Mod, a);
+        var (_, c, _) = EuclidSteps(ctx.Mod, a, b, 0, needMatrix: false);
+        return MakeMonic(ctx.Mod, c);
     }
 
     /// <summary>Monic gcd g with cofactors s, t such that s·a + t·b = g (Bézout). For a = b = 0 all
@@ -122,14 +123,7 @@ internal static partial class PolyMod
     /// <summary>Half-GCD base case: plain Euclidean steps with matrix tracking until deg b &lt; m.</summary>
     private static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcdBase(PolyModContext ctx, ulong[] a, ulong[] b, int m, bool needMatrix)
     {
-        var mat = needMatrix ? PolyMatrix.Identity() : null;
-        while (b.Length - 1 >= m)
-        {
-            var (q, r) = DivRemBasic(ctx.Mod, a, b);
-            mat?.ApplyQuotient(ctx, q);
-            (a, b) = (b, r);
-        }
-        return (mat, a, b);
+        return EuclidSteps(ctx.Mod, a, b, m, needMatrix);
     }
 
     /// <summary>(M00·x + M01·y, M10·x + M11·y), sharing the transforms of all six operands when they are long.</summary>
@@ -137,7 +131,7 @@ internal static partial class PolyMod
     {
         int small = Math.Min(Math.Min(MinNonEmpty(mat.M00, x), MinNonEmpty(mat.M01, y)), Math.Min(MinNonEmpty(mat.M10, x), MinNonEmpty(mat.M11, y)));
         if (small == int.MaxValue) return ([], []);
-        if (small < UnivariateThresholds.Ntt)
+        if (small < UnivariateThresholds.MatrixTransform)
             return (Dot(ctx, mat.M00, x, mat.M01, y), Dot(ctx, mat.M10, x, mat.M11, y));
         var ntt = ctx.Ntt;
         int n0 = Math.Max(ProductLength(mat.M00, x), ProductLength(mat.M01, y));
@@ -168,7 +162,7 @@ internal static partial class PolyMod
     public static PolyMatrix MatMul(PolyModContext ctx, PolyMatrix s, PolyMatrix r)
     {
         int small = Math.Min(MinEntry(s), MinEntry(r));
-        if (small < UnivariateThresholds.Ntt)
+        if (small < UnivariateThresholds.MatrixTransform)
             return new PolyMatrix(
                 Dot(ctx, s.M00, r.M00, s.M01, r.M10), Dot(ctx, s.M00, r.M01, s.M01, r.M11),
                 Dot(ctx, s.M10, r.M00, s.M11, r.M10), Dot(ctx, s.M10, r.M01, s.M11, r.M11));

@@ -38,16 +38,37 @@ internal static partial class PolyMod
         return Trim(r);
     }
 
-    /// <summary>dst ← a·b, dst.Length = la + lb − 1 (both non-empty). Dispatches on the shorter length:
-    /// schoolbook below <see cref="UnivariateThresholds.Karatsuba"/>, Karatsuba below
-    /// <see cref="UnivariateThresholds.Ntt"/>, transforms above.</summary>
+    /// <summary>dst ← a·b, dst.Length = la + lb − 1 (both non-empty).</summary>
+    /// <remarks>Dispatch: schoolbook when the shorter operand is below <see cref="UnivariateThresholds.Ntt"/>
+    /// coefficients; otherwise transforms when their estimated cost k·L·log₂L (k transform primes,
+    /// L the transform length) is below that of the classical product, la·lb scaled by the Karatsuba saving
+    /// (Karatsuba/lb)^0.415 once the shorter operand reaches <see cref="UnivariateThresholds.Karatsuba"/>.
+    /// The constants come from timing all three on a 2-core AMD EPYC (UnivariateMultiplyBenchmarks).</remarks>
     public static void Multiply(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
     {
         if (a.Length < b.Length) { var t = a; a = b; b = t; }
-        int lb = b.Length;
-        if (lb < UnivariateThresholds.Karatsuba) MultiplySchoolbook(ctx.Mod, a, b, dst);
-        else if (lb < UnivariateThresholds.Ntt) MultiplyKaratsuba(ctx.Mod, a, b, dst);
-        else ctx.Ntt.Multiply(a, b, dst);
+        int la = a.Length, lb = b.Length;
+        if (lb < UnivariateThresholds.Ntt)
+        {
+            if (lb < UnivariateThresholds.Karatsuba) MultiplySchoolbook(ctx.Mod, a, b, dst);
+            else MultiplyKaratsuba(ctx.Mod, a, b, dst);
+            return;
+        }
+        bool kara = lb >= UnivariateThresholds.Karatsuba;
+        if (TransformPays(ctx, la, lb, NttMultiplier.TransformLength(la + lb - 1))) ctx.Ntt.Multiply(a, b, dst);
+        else if (kara) MultiplyKaratsuba(ctx.Mod, a, b, dst);
+        else MultiplySchoolbook(ctx.Mod, a, b, dst);
+    }
+
+    /// <summary>The cost model of <see cref="Multiply(PolyModContext, ReadOnlySpan{ulong}, ReadOnlySpan{ulong}, Span{ulong})"/>:
+    /// true when transforms of length <paramref name="len"/> beat the classical product of lengths la ≥ lb.</summary>
+    public static bool TransformPays(PolyModContext ctx, int la, int lb, int len)
+    {
+        if (lb < UnivariateThresholds.Ntt) return false;
+        double transformCost = UnivariateThresholds.TransformCostFactor * ctx.Ntt.PrimesFor(lb) * len * System.Numerics.BitOperations.Log2((uint)len);
+        bool kara = lb >= UnivariateThresholds.Karatsuba;
+        double classicalCost = (double)la * lb * (kara ? Math.Pow((double)UnivariateThresholds.Karatsuba / lb, 0.415) : 1.0);
+        return transformCost < classicalCost;
     }
 
     /// <summary>dst ← a·b by the quadratic method with delayed (128-bit) reduction: one reduction per

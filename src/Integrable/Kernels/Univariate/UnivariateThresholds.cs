@@ -6,11 +6,21 @@ namespace Integrable.Kernels.Univariate;
 /// UnivariateMultiplyBenchmarks class. All lengths are coefficient counts (degree + 1).</remarks>
 internal static class UnivariateThresholds
 {
-    /// <summary>Karatsuba replaces schoolbook multiplication when the shorter operand has at least this many coefficients.</summary>
-    internal static int Karatsuba = 40;
+    /// <summary>Karatsuba replaces schoolbook multiplication when the shorter operand has at least this many
+    /// coefficients (and transforms are not cheaper).</summary>
+    internal static int Karatsuba = 32;
 
-    /// <summary>Transform (NTT) multiplication replaces Karatsuba when the shorter operand has at least this many coefficients.</summary>
-    internal static int Ntt = 200;
+    /// <summary>Below this shorter-operand length transforms are never used; above it a cost model picks
+    /// between transforms and the classical product (see PolyMod.Multiply).</summary>
+    internal static int Ntt = 16;
+
+    /// <summary>Weight of the transform cost k·L·log₂L against the classical cost in the multiplication cost
+    /// model (0 forces transforms whenever the shorter operand reaches <see cref="Ntt"/>).</summary>
+    internal static double TransformCostFactor = 0.9;
+
+    /// <summary>2×2 polynomial matrix products (half-GCD) share the transforms of their entries once the
+    /// shortest entry has this many coefficients; below, each product is dispatched on its own.</summary>
+    internal static int MatrixTransform = 40;
 
     /// <summary>Newton (reciprocal) division replaces long division when both the quotient and the divisor have at least this many coefficients.</summary>
     internal static int NewtonDivision = 400;

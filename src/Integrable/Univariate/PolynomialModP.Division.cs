@@ -13,7 +13,7 @@ public sealed partial class PolynomialModP
     public static (PolynomialModP Quotient, PolynomialModP Remainder) DivRem(PolynomialModP dividend, PolynomialModP divisor)
     {
         var ctx = Common(dividend, divisor);
-        var (q, r) = PolyMod.DivRem(ctx, dividend._c, divisor._c);
+        var (q, r) = PolyMod.DivRem(ctx, dividend._c, divisor._c, ref divisor._reciprocal);
         return (new(ctx, q), new(ctx, r));
     }
 
@@ -39,7 +39,7 @@ public sealed partial class PolynomialModP
     public bool TryDivideExact(PolynomialModP divisor, out PolynomialModP quotient)
     {
         var ctx = Common(this, divisor);
-        var (q, r) = PolyMod.DivRem(ctx, _c, divisor._c);
+        var (q, r) = PolyMod.DivRem(ctx, _c, divisor._c, ref divisor._reciprocal);
         quotient = new(ctx, r.Length == 0 ? q : []);
         return r.Length == 0;
     }

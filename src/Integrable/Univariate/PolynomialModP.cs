@@ -28,6 +28,7 @@ public sealed partial class PolynomialModP : IRingElement<PolynomialModP>
 {
     private readonly ulong[] _c;
     internal readonly PolyModContext Context;
+    private ulong[]? _reciprocal;   // cached power-series inverse of the reversal, for Newton division by this polynomial
 
     private PolynomialModP(PolyModContext context, ulong[] trimmed)
     {

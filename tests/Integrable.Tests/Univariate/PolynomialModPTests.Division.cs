@@ -57,6 +57,23 @@ public class PolynomialModPDivisionTests
     }
 
     [Fact]
+    public void DivRem_SameDivisorRepeatedly_ReusesAndExtendsTheReciprocal()
+    {
+        // The divisor caches the inverse of its reversal; later divisions with longer quotients extend it.
+        var f = new PrimeField(2147483647);
+        var rng = new Random(24);
+        var b = RandomPoly(rng, f, 500);
+        foreach (int da in new[] { 1300, 900, 2600, 1000, 3100 })
+        {
+            var a = RandomPoly(rng, f, da);
+            var (q, r) = PolynomialModP.DivRem(a, b);
+            Assert.Equal(a, q * b + r);
+            Assert.True(r.Degree < b.Degree);
+            Assert.Equal(a, (a * b).DivideExact(b));
+        }
+    }
+
+    [Fact]
     public void Divide_ByZero_Throws()
     {
         var f = new PrimeField(101);

@@ -7,12 +7,29 @@ internal static partial class PolyMod
     /// reciprocal of the reversed divisor when both reach <see cref="UnivariateThresholds.NewtonDivision"/>.</summary>
     public static (ulong[] Quotient, ulong[] Remainder) DivRem(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
+        ulong[]? cache = null;
+        return DivRem(ctx, a, b, ref cache);
+    }
+
+    /// <summary>As <see cref="DivRem(PolyModContext, ReadOnlySpan{ulong}, ReadOnlySpan{ulong})"/>, reusing (and
+    /// extending) a cached power-series inverse of the reversed divisor between calls with the same divisor.</summary>
+    public static (ulong[] Quotient, ulong[] Remainder) DivRem(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, ref ulong[]? reciprocal)
+    {
         if (b.IsEmpty) throw new DivideByZeroException("polynomial division by zero");
         if (a.Length < b.Length) return ([], a.ToArray());
-        int lq = a.Length - b.Length + 1;
-        if (lq >= UnivariateThresholds.NewtonDivision && b.Length >= UnivariateThresholds.NewtonDivision)
-            return DivRemNewton(ctx, a, b);
-        return DivRemBasic(ctx.Mod, a, b);
+        int la = a.Length, lb = b.Length, lq = la - lb + 1;
+        if (lq < UnivariateThresholds.NewtonDivision || lb < UnivariateThresholds.NewtonDivision)
+            return DivRemBasic(ctx.Mod, a, b);
+        if (reciprocal is null || reciprocal.Length < lq)
+        {
+            // rev(b) mod x^n: the top n coefficients of b, reversed.
+            int n = Math.Min(lb, lq);
+            var revB = Reverse(b[(lb - n)..], n);
+            reciprocal = InverseSeries(ctx, revB, lq, reciprocal);
+        }
+        var q = QuotientFromInverse(ctx, a, lb, reciprocal);
+        var r = RemainderWrapped(ctx, a, b, q);
+        return (q, r);
     }
 
     /// <summary>Long division, column by column: quotient coefficient k is
@@ -74,13 +91,11 @@ internal static partial class PolyMod
     /// lb − 1 coefficients, so the wrapped product gives it exactly).</summary>
     public static (ulong[] Quotient, ulong[] Remainder) DivRemNewton(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
-        int la = a.Length, lb = b.Length, lq = la - lb + 1;
+        int lb = b.Length, lq = a.Length - lb + 1;
         int n = Math.Min(lb, lq);
-        var revB = Reverse(b[(lb - n)..], n);            // rev(b) mod x^n: the top n coefficients, reversed
-        var inv = InverseSeries(ctx, revB, lq);
+        var inv = InverseSeries(ctx, Reverse(b[(lb - n)..], n), lq);
         var q = QuotientFromInverse(ctx, a, lb, inv);
-        var r = RemainderWrapped(ctx, a, b, q);
-        return (q, r);
+        return (q, RemainderWrapped(ctx, a, b, q));
     }
 
     /// <summary>The quotient of a by a divisor with lb coefficients, given the power-series inverse of the
@@ -121,14 +136,15 @@ internal static partial class PolyMod
     /// <summary>The power series f⁻¹ mod x^n (f[0] ≠ 0) by Newton iteration g ← g − g·(f·g − 1), doubling
     /// the precision; with transforms the product f·g is taken cyclically at length 2k, where its
     /// wrapped part does not reach the needed coefficients k … 2k − 1.</summary>
-    public static ulong[] InverseSeries(PolyModContext ctx, ReadOnlySpan<ulong> f, int n)
+    public static ulong[] InverseSeries(PolyModContext ctx, ReadOnlySpan<ulong> f, int n, ulong[]? start = null)
     {
         var mod = ctx.Mod;
         if (f.IsEmpty || f[0] == 0) throw new DivideByZeroException("power series with zero constant term is not invertible");
         var ladder = new List<int>();
         int k = n;
-        while (k > 32) { ladder.Add(k); k = (k + 1) / 2; }
-        var g = InverseSeriesBasic(mod, f, k);
+        int have = start?.Length ?? 0;   // a known inverse to precision `have` (extended, not recomputed)
+        while (k > 32 && k > have) { ladder.Add(k); k = (k + 1) / 2; }
+        var g = have >= k ? start![..k] : InverseSeriesBasic(mod, f, k);
         for (int step = ladder.Count - 1; step >= 0; step--)
         {
             int k2 = ladder[step];

@@ -75,6 +75,8 @@ public abstract class W3WorkloadBase : IWorkload
             if (verbose)
                 Console.WriteLine($"  n={n + 1} degnum={p1.Degree} degden={q1.Degree} seconds={Timing.Seconds(s3)} cpu={(Process.GetCurrentProcess().TotalProcessorTime - cpu0).TotalSeconds:F3} (products {tMul:F3}, gcd {tGcd:F3}, divisions {tDiv:F3})");
         }
+        if (verbose)
+            Console.WriteLine($"  gc: gen0={GC.CollectionCount(0)} gen1={GC.CollectionCount(1)} gen2={GC.CollectionCount(2)} pause={GC.GetTotalPauseDuration().TotalSeconds:F3}s allocated={GC.GetTotalAllocatedBytes() / 1e9:F1}GB");
         return (p1.Degree, sw.Elapsed.TotalSeconds);
     }
 }

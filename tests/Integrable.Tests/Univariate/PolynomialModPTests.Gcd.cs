@@ -107,6 +107,26 @@ public class PolynomialModPGcdTests
         }
     }
 
+    [Theory]
+    [InlineData(60, 5000)]
+    [InlineData(300, 2000)]
+    [InlineData(1000, 1100)]
+    public void MatVec_ChunkedTransforms_MatchDirectProducts(int entryLength, int vectorLength)
+    {
+        // Short matrix entries against long vectors: the transform path may cut the vectors into chunks.
+        var f = new PrimeField(2147483647);
+        var ctx = PolyModContext.For(f);
+        var rng = new Random(38);
+        var m = new PolyMatrix(RandomPoly(rng, f, entryLength - 1).ToArray(), RandomPoly(rng, f, entryLength - 3).ToArray(),
+            RandomPoly(rng, f, entryLength - 2).ToArray(), RandomPoly(rng, f, entryLength - 1).ToArray());
+        var x = RandomPoly(rng, f, vectorLength - 1);
+        var y = RandomPoly(rng, f, vectorLength - 7);
+        var (u, v) = PolyMod.MatVec(ctx, m, x.ToArray(), y.ToArray());
+        PolynomialModP P(ulong[] c) => PolynomialModP.FromCoefficients(f, c);
+        Assert.Equal(P(m.M00) * x + P(m.M01) * y, P(u));
+        Assert.Equal(P(m.M10) * x + P(m.M11) * y, P(v));
+    }
+
     private static ulong[] MakeMonicArr(PolyModContext ctx, ulong[] a) => PolyMod.MakeMonic(ctx.Mod, a);
 
     [Fact]

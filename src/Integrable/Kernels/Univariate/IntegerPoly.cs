@@ -198,6 +198,9 @@ internal static class IntegerPoly
     {
         if (a.Length == 1 || b.Length == 1) return [BigInteger.One];
         var gamma = BigInteger.GreatestCommonDivisor(a[^1], b[^1]);
+        // Landau–Mignotte: every factor h of a has ‖h‖∞ ≤ 2^deg h·‖a‖₂; the images are scaled by γ.
+        var bound = gamma * (BigInteger.One << Math.Min(a.Length, b.Length)) * BigInteger.Min(Norm2Ceiling(a), Norm2Ceiling(b));
+        var target = 2 * bound + 1;
         MultiModular? acc = null;
         int degree = int.MaxValue;
         for (int i = 0; ; i++)
@@ -212,10 +215,14 @@ internal static class IntegerPoly
             if (d < degree) { degree = d; acc = new MultiModular(d + 1); }
             var scaled = PolyMod.Scale(ctx.Mod, g, Residue(gamma, p));
             acc!.Add(p, scaled);
-            if (acc.Stable)
+            if (acc.Stable || acc.Modulus > target)
             {
                 var h = PrimitivePositive(Trim(acc.Reconstruct()));
                 if (h.Length == degree + 1 && TryDivideExact(a, h, out _) && TryDivideExact(b, h, out _)) return h;
+                // Past the bound a failed check means every prime so far was unlucky (finitely many exist):
+                // keep going; a prime giving a lower degree restarts the accumulation.
+                if (acc.Count > 4096)
+                    throw new InvalidOperationException("modular gcd did not converge (internal error)");
             }
         }
     }

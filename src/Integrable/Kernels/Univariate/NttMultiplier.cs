@@ -249,6 +249,35 @@ internal sealed class NttMultiplier
                 _owner._primes[i].PointwiseMontMulAdd(Row(i), a.Row(i), b.Row(i));
         }
 
+        /// <summary>this ← this − a ∘ b.</summary>
+        public void SubtractProduct(Transformed a, Transformed b)
+        {
+            Check(a); Check(b);
+            for (int i = 0; i < Primes; i++)
+                _owner._primes[i].PointwiseMontMulSub(Row(i), a.Row(i), b.Row(i));
+        }
+
+        /// <summary>Multiplies every value by R = 2^32 (so that a later Montgomery product with it is an
+        /// ordinary product of normal-form values).</summary>
+        public void ScaleByR()
+        {
+            for (int i = 0; i < Primes; i++)
+                _owner._primes[i].ScaleMont(Row(i), _owner._primes[i].R2ModQ);
+        }
+
+        /// <summary>A transform at length <paramref name="len"/> (a power of two dividing this length, at
+        /// least 16) over the first <paramref name="primes"/> primes, taken from this one: the first len
+        /// values of a decimation-in-frequency transform are the transform of the polynomial reduced mod
+        /// x^len − 1, so for polynomials shorter than len nothing needs recomputing.</summary>
+        public Transformed Prefix(int len, int primes)
+        {
+            if (len > Length || Length % len != 0 || primes > Primes || len < 16)
+                throw new InvalidOperationException("prefix shape not available");
+            var t = new Transformed(_owner, len, primes);
+            for (int i = 0; i < primes; i++) Row(i)[..len].CopyTo(t.Row(i));
+            return t;
+        }
+
         private void Check(Transformed o)
         {
             if (o.Length != Length || o.Primes != Primes) throw new InvalidOperationException("transform shapes differ");

@@ -381,6 +381,25 @@ internal sealed class NttPrime
         }
     }
 
+    /// <summary>dst[i] = (dst[i] − MontMul(a[i], b[i])) mod q.</summary>
+    public unsafe void PointwiseMontMulSub(Span<uint> dst, ReadOnlySpan<uint> a, ReadOnlySpan<uint> b)
+    {
+        int n = dst.Length, i = 0;
+        fixed (uint* d = dst)
+        fixed (uint* pa = a)
+        fixed (uint* pb = b)
+        {
+            if (Avx2.IsSupported && AllowVector)
+            {
+                var q = Vector256.Create(Q);
+                var qinv = Vector256.Create(QInv);
+                for (; i + 8 <= n; i += 8)
+                    Avx.Store(d + i, VSub(Avx.LoadVector256(d + i), VMontMul(Avx.LoadVector256(pa + i), Avx.LoadVector256(pb + i), q, qinv), q));
+            }
+            for (; i < n; i++) d[i] = Sub(d[i], MontMul(pa[i], pb[i]));
+        }
+    }
+
     /// <summary>dst[i] = MontMul(a[i], b[i]) written into a separate destination.</summary>
     public unsafe void PointwiseMontMulTo(Span<uint> dst, ReadOnlySpan<uint> a, ReadOnlySpan<uint> b)
     {

@@ -1,3 +1,4 @@
+using System.Numerics;
 namespace Integrable.Kernels.Univariate;
 
 internal static partial class PolyMod
@@ -75,37 +76,80 @@ internal static partial class PolyMod
     {
         int n = a.Length - 1, m = (n + 1) / 2;
         if (b.Length - 1 < m) return (needMatrix ? PolyMatrix.Identity() : null, a, b);
-        if (n < UnivariateThresholds.HalfGcdBase || n < 8) { long t00 = Prof.Now; var res = HalfGcdBase(ctx, a, b, m, needMatrix); Prof.Add(0, t00); return res; }
+        if (n < UnivariateThresholds.HalfGcdBase || n < 8) return HalfGcdBase(ctx, a, b, m, needMatrix);
 
         var (r, a1, b1) = HalfGcd(ctx, a[m..], b[m..], needMatrix: true);
-        long t1 = Prof.Now;
-        var (x, y) = Recombine(ctx, r!, a1, b1, a.AsSpan(0, m), b.AsSpan(0, m), m);
-        Prof.Add(1, t1); Prof.Add(5 + Math.Min(10, System.Numerics.BitOperations.Log2((uint)n) - 6), t1);
+        var (x, y) = Recombine(ctx, r!, a1, b1, a.AsSpan(0, m), b.AsSpan(0, m), m, needMatrix, out var rTransforms);
+        using var rT = rTransforms;
         if (y.Length - 1 < m) return (r, x, y);
-        long t2 = Prof.Now;
         var (q, rem) = DivRem(ctx, x, y);
         r!.ApplyQuotient(ctx, q);
-        Prof.Add(2, t2);
         (x, y) = (y, rem);
         if (y.Length - 1 < m) return (r, x, y);
         int k = 2 * m - (x.Length - 1);
         var (s, a2, b2) = HalfGcd(ctx, x[k..], y.Length > k ? y[k..] : [], needMatrix: true);
-        long t3 = Prof.Now;
-        var (c, d) = Recombine(ctx, s!, a2, b2, x.AsSpan(0, k), y.AsSpan(0, Math.Min(k, y.Length)), k);
-        Prof.Add(3, t3);
-        long t4 = Prof.Now;
-        var mm = needMatrix ? MatMul(ctx, s!, r) : null;
-        Prof.Add(4, t4);
+        var (c, d) = Recombine(ctx, s!, a2, b2, x.AsSpan(0, k), y.AsSpan(0, Math.Min(k, y.Length)), k, needMatrix, out var sTransforms);
+        using var sT = sTransforms;
+        if (!needMatrix) return (null, c, d);
+        var mm = MatMulReusing(ctx, s!, r, sT, rT) ?? MatMul(ctx, s!, r);
         return (mm, c, d);
+    }
+
+    /// <summary>Transforms of the four entries of a matrix at one length, kept from a matrix–vector product.</summary>
+    internal sealed class MatrixTransforms(NttMultiplier.Transformed t00, NttMultiplier.Transformed t01,
+        NttMultiplier.Transformed t10, NttMultiplier.Transformed t11) : IDisposable
+    {
+        public readonly NttMultiplier.Transformed T00 = t00, T01 = t01, T10 = t10, T11 = t11;
+
+        public void Dispose()
+        {
+            T00.Dispose(); T01.Dispose(); T10.Dispose(); T11.Dispose();
+        }
+    }
+
+    /// <summary>S·R′ with R′ = [[0, 1], [1, −q]]·R, using the transforms of S and of R kept from the two
+    /// matrix–vector products: prefixes of them are the transforms at the (shorter) product length
+    /// (all of S, and R′'s first row, which is R's second row). Saves six forward transforms per half-GCD
+    /// node. Returns null when the shapes do not allow it.</summary>
+    private static PolyMatrix? MatMulReusing(PolyModContext ctx, PolyMatrix s, PolyMatrix r, MatrixTransforms? sT, MatrixTransforms? rT)
+    {
+        if (sT is null || rT is null) return null;
+        int n = s.MaxLength + r.MaxLength - 1;
+        int len = NttMultiplier.TransformLength(n);
+        int kp = ctx.Ntt.PrimesFor(2L * Math.Min(s.MaxLength, r.MaxLength));
+        if (len < 16 || len > sT.T00.Length || len > rT.T00.Length || kp > sT.T00.Primes || kp > rT.T00.Primes)
+            return null;
+        var ntt = ctx.Ntt;
+        using var s00 = sT.T00.Prefix(len, kp);
+        using var s01 = sT.T01.Prefix(len, kp);
+        using var s10 = sT.T10.Prefix(len, kp);
+        using var s11 = sT.T11.Prefix(len, kp);
+        // R′ row 0 = old row 1.
+        using var r00 = rT.T10.Prefix(len, kp);
+        using var r01 = rT.T11.Prefix(len, kp);
+        // R′'s second row (old row 0 − q·old row 1) is reduced mod p, which is not the integer
+        // combination of the old transforms: it is transformed afresh.
+        using var r10 = ntt.Transform(r.M10, len, kp);
+        using var r11 = ntt.Transform(r.M11, len, kp);
+        using var acc = ntt.Allocate(len, kp);
+        ulong[] Entry(NttMultiplier.Transformed a1, NttMultiplier.Transformed b1, NttMultiplier.Transformed a2, NttMultiplier.Transformed b2)
+        {
+            var res = new ulong[n];
+            acc.SetProduct(a1, b1);
+            acc.AddProduct(a2, b2);
+            acc.InverseTo(res);
+            return Trim(res);
+        }
+        return new PolyMatrix(Entry(s00, r00, s01, r10), Entry(s00, r01, s01, r11), Entry(s10, r00, s11, r10), Entry(s10, r01, s11, r11));
     }
 
     /// <summary>(hiA·x^k + M00·loA + M01·loB, hiB·x^k + M10·loA + M11·loB).</summary>
     private static (ulong[], ulong[]) Recombine(PolyModContext ctx, PolyMatrix mat, ulong[] hiA, ulong[] hiB,
-        ReadOnlySpan<ulong> loA, ReadOnlySpan<ulong> loB, int k)
+        ReadOnlySpan<ulong> loA, ReadOnlySpan<ulong> loB, int k, bool keep, out MatrixTransforms? transforms)
     {
         loA = loA[..TrimmedLength(loA)];
         loB = loB[..TrimmedLength(loB)];
-        var (u, v) = MatVec(ctx, mat, loA, loB);
+        var (u, v) = MatVec(ctx, mat, loA, loB, keep, out transforms);
         return (AddShifted(ctx.Mod, u, hiA, k), AddShifted(ctx.Mod, v, hiB, k));
     }
 
@@ -127,35 +171,68 @@ internal static partial class PolyMod
     }
 
     /// <summary>(M00·x + M01·y, M10·x + M11·y), sharing the transforms of all six operands when they are long.</summary>
-    public static (ulong[], ulong[]) MatVec(PolyModContext ctx, PolyMatrix mat, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y)
+    public static (ulong[], ulong[]) MatVec(PolyModContext ctx, PolyMatrix mat, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y) =>
+        MatVec(ctx, mat, x, y, false, out _);
+
+    /// <summary>As MatVec; when <paramref name="keep"/> and transforms were used, also hands back the
+    /// transforms of the matrix entries (the caller disposes them).</summary>
+    internal static (ulong[], ulong[]) MatVec(PolyModContext ctx, PolyMatrix mat, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y,
+        bool keep, out MatrixTransforms? transforms)
     {
+        transforms = null;
         int small = Math.Min(Math.Min(MinNonEmpty(mat.M00, x), MinNonEmpty(mat.M01, y)), Math.Min(MinNonEmpty(mat.M10, x), MinNonEmpty(mat.M11, y)));
         if (small == int.MaxValue) return ([], []);
         if (small < UnivariateThresholds.MatrixTransform)
             return (Dot(ctx, mat.M00, x, mat.M01, y), Dot(ctx, mat.M10, x, mat.M11, y));
         var ntt = ctx.Ntt;
+        var mod = ctx.Mod;
         int n0 = Math.Max(ProductLength(mat.M00, x), ProductLength(mat.M01, y));
         int n1 = Math.Max(ProductLength(mat.M10, x), ProductLength(mat.M11, y));
-        int len = NttMultiplier.TransformLength(Math.Max(n0, n1));
-        long terms = Math.Max(Math.Min(mat.M00.Length, x.Length) + (long)Math.Min(mat.M01.Length, y.Length),
-                              Math.Min(mat.M10.Length, x.Length) + (long)Math.Min(mat.M11.Length, y.Length));
-        int kp = ntt.PrimesFor(terms);
-        using var tx = ntt.Transform(x, len, kp);
-        using var ty = ntt.Transform(y, len, kp);
-        using var t00 = ntt.Transform(mat.M00, len, kp);
-        using var t01 = ntt.Transform(mat.M01, len, kp);
-        using var t10 = ntt.Transform(mat.M10, len, kp);
-        using var t11 = ntt.Transform(mat.M11, len, kp);
+        int lenM = mat.MaxLength, lenV = Math.Max(x.Length, y.Length);
+        // Transform length: the smallest power of two holding the whole product, or a smaller one with the
+        // vector cut into chunks of L − lenM + 1 coefficients, whichever has the lower cost
+        // (4 + 4c)·L·log L (4 matrix transforms, then per chunk 2 forward and 2 inverse).
+        int len = NttMultiplier.TransformLength(lenM + lenV - 1), chunk = lenV;
+        double best = 8.0 * len * BitOperations.Log2((uint)len);
+        for (int cand = len / 2; cand >= 2 * lenM && cand >= 16; cand /= 2)
+        {
+            int ch = cand - lenM + 1, c = (lenV + ch - 1) / ch;
+            double cost = (4.0 + 4.0 * c) * cand * BitOperations.Log2((uint)cand);
+            if (cost < best) { best = cost; len = cand; chunk = ch; }
+        }
+        int kp = ntt.PrimesFor(2L * Math.Min(lenM, chunk));
+        var mt = new MatrixTransforms(ntt.Transform(mat.M00, len, kp), ntt.Transform(mat.M01, len, kp),
+            ntt.Transform(mat.M10, len, kp), ntt.Transform(mat.M11, len, kp));
+        var (t00, t01, t10, t11) = (mt.T00, mt.T01, mt.T10, mt.T11);
         using var acc = ntt.Allocate(len, kp);
         var r0 = new ulong[n0];
-        acc.SetProduct(t00, tx);
-        acc.AddProduct(t01, ty);
-        acc.InverseTo(r0);
         var r1 = new ulong[n1];
-        acc.SetProduct(t10, tx);
-        acc.AddProduct(t11, ty);
-        acc.InverseTo(r1);
+        ulong[]? tmp = chunk < lenV ? new ulong[len] : null;
+        for (int off = 0; off < lenV; off += chunk)
+        {
+            var xs = off < x.Length ? x.Slice(off, Math.Min(chunk, x.Length - off)) : [];
+            var ys = off < y.Length ? y.Slice(off, Math.Min(chunk, y.Length - off)) : [];
+            using var tx = ntt.Transform(xs, len, kp);
+            using var ty = ntt.Transform(ys, len, kp);
+            Accumulate(acc, t00, tx, t01, ty, r0, off, tmp, mod);
+            Accumulate(acc, t10, tx, t11, ty, r1, off, tmp, mod);
+        }
+        if (keep) transforms = mt;
+        else mt.Dispose();
         return (Trim(r0), Trim(r1));
+
+        static void Accumulate(NttMultiplier.Transformed acc, NttMultiplier.Transformed a1, NttMultiplier.Transformed b1,
+            NttMultiplier.Transformed a2, NttMultiplier.Transformed b2, ulong[] dst, int off, ulong[]? tmp, in ModulusReducer mod)
+        {
+            int n = Math.Min(acc.Length, dst.Length - off);
+            if (n <= 0) return;
+            acc.SetProduct(a1, b1);
+            acc.AddProduct(a2, b2);
+            if (tmp is null) { acc.InverseTo(dst.AsSpan(off, n)); return; }
+            acc.InverseTo(tmp.AsSpan(0, n));
+            var d = dst.AsSpan(off, n);
+            for (int i = 0; i < n; i++) d[i] = mod.Add(d[i], tmp[i]);
+        }
     }
 
     /// <summary>The matrix product s·r, sharing transforms when the entries are long.</summary>

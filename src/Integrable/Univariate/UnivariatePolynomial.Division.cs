@@ -63,7 +63,8 @@ public sealed partial class UnivariatePolynomial
         if (IsZero) return true;
         if (Degree < divisor.Degree) return false;
         if (divisor.IsConstant) { quotient = this / divisor._c[0]; return true; }
-        if (Math.Min(divisor._c.Length, _c.Length - divisor._c.Length + 1) < ModularMultiplyThreshold)
+        int lq = _c.Length - divisor._c.Length + 1;
+        if (Math.Min(divisor._c.Length, lq) < ModularMultiplyThreshold || (long)lq * divisor._c.Length < 20000)
         {
             var (q, r) = DivRem(this, divisor);
             if (!r.IsZero) return false;

@@ -20,7 +20,7 @@ internal sealed class ThresholdScope : IDisposable
         _hbase = UnivariateThresholds.HalfGcdBase, _qmul = UnivariatePolynomial.ModularMultiplyThreshold,
         _zmul = IntegerPoly.ModularProductThreshold, _mat = UnivariateThresholds.MatrixTransform;
     private readonly double _factor = UnivariateThresholds.TransformCostFactor;
-    private readonly bool _vector = NttPrime.AllowVector;
+    private readonly bool _vector = NttPrime.AllowVector, _forceZ = IntegerPoly.ForceModularProduct;
 
     public ThresholdScope(int? karatsuba = null, int? ntt = null, int? newton = null, int? halfGcd = null,
         int? halfGcdBase = null, bool? vector = null, int? rationalModular = null, int? integerModular = null,
@@ -35,7 +35,7 @@ internal sealed class ThresholdScope : IDisposable
         if (halfGcdBase is int hb) UnivariateThresholds.HalfGcdBase = hb;
         if (vector is bool v) NttPrime.AllowVector = v;
         if (rationalModular is int q) UnivariatePolynomial.ModularMultiplyThreshold = q;
-        if (integerModular is int z) IntegerPoly.ModularProductThreshold = z;
+        if (integerModular is int z) { IntegerPoly.ModularProductThreshold = z; IntegerPoly.ForceModularProduct = true; }
     }
 
     public void Dispose()
@@ -48,6 +48,7 @@ internal sealed class ThresholdScope : IDisposable
         NttPrime.AllowVector = _vector;
         UnivariatePolynomial.ModularMultiplyThreshold = _qmul;
         IntegerPoly.ModularProductThreshold = _zmul;
+        IntegerPoly.ForceModularProduct = _forceZ;
         UnivariateThresholds.MatrixTransform = _mat;
         UnivariateThresholds.TransformCostFactor = _factor;
     }

@@ -12,6 +12,9 @@ internal static class IntegerPoly
     /// <summary>Below this shorter length products are computed directly (Int128 or BigInteger schoolbook).</summary>
     internal static int ModularProductThreshold = 24;
 
+    /// <summary>Tests set this to take the modular product path whenever the threshold allows.</summary>
+    internal static bool ForceModularProduct;
+
     public static BigInteger[] Trim(BigInteger[] a)
     {
         int n = a.Length;
@@ -82,18 +85,27 @@ internal static class IntegerPoly
     // ------------------------------------------------------------------ products
 
     /// <summary>The exact product a·b.</summary>
+    /// <remarks>Schoolbook (Int128 accumulation when the coefficients allow, BigInteger otherwise) or
+    /// images modulo 62-bit primes, by a cost estimate: classical la·lb·w² word products (w words per
+    /// coefficient) against k primes × (reductions (la + lb)·w + transforms 5·L·log₂L + remaindering n·k).</remarks>
     public static BigInteger[] Multiply(ReadOnlySpan<BigInteger> a, ReadOnlySpan<BigInteger> b)
     {
         if (a.IsEmpty || b.IsEmpty) return [];
         int minLen = Math.Min(a.Length, b.Length);
         var na = MaxNorm(a);
         var nb = MaxNorm(b);
-        if (minLen < ModularProductThreshold)
+        long bits = (long)na.GetBitLength() + (long)nb.GetBitLength() + BitOperations.Log2((uint)minLen) + 1;
+        if (minLen >= ModularProductThreshold)
         {
-            long bits = (long)na.GetBitLength() + (long)nb.GetBitLength() + BitOperations.Log2((uint)minLen) + 1;
-            return bits <= 126 ? MultiplyInt128(a, b) : MultiplySchoolbook(a, b);
+            int n = a.Length + b.Length - 1;
+            double w = Math.Max(1.0, Math.Max((double)na.GetBitLength(), (double)nb.GetBitLength()) / 64);
+            double k = bits / 61.0 + 1;
+            double len = NttMultiplier.TransformLength(n);
+            double classical = (double)a.Length * b.Length * w * w;
+            double modular = k * ((a.Length + b.Length) * w + 5 * len * Math.Log2(len) + n * k);
+            if (modular < classical || ForceModularProduct) return MultiplyModular(a, b, na * nb * minLen);   // |coefficients| ≤ bound
         }
-        return MultiplyModular(a, b, na * nb * minLen);   // every coefficient has absolute value ≤ bound
+        return bits <= 126 ? MultiplyInt128(a, b) : MultiplySchoolbook(a, b);
     }
 
     private static BigInteger[] MultiplyInt128(ReadOnlySpan<BigInteger> a, ReadOnlySpan<BigInteger> b)

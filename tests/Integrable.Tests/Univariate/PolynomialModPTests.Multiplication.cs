@@ -63,6 +63,14 @@ public class PolynomialModPMultiplicationTests
 
     [Theory]
     [MemberData(nameof(ModuliData), MemberType = typeof(UnivariateTestSupport))]
+    public void Multiply_Avx2TransformPath_MatchesReference(ulong p)
+    {
+        using var _ = new ThresholdScope(karatsuba: 1, ntt: 1, transformCostFactor: 0, vector512: false);
+        CheckAll(p, 8);
+    }
+
+    [Theory]
+    [MemberData(nameof(ModuliData), MemberType = typeof(UnivariateTestSupport))]
     public void Multiply_ScalarTransformPath_MatchesReference(ulong p)
     {
         using var _ = new ThresholdScope(karatsuba: 1, ntt: 1, transformCostFactor: 0, vector: false);

@@ -210,6 +210,42 @@ internal sealed class NttPrime
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static Vector512<uint> WMontMul(Vector512<uint> a, Vector512<uint> b, Vector512<uint> q, Vector512<uint> qinv)
+    {
+        Vector512<ulong> pe = Avx512F.Multiply(a, b);
+        Vector512<ulong> po = Avx512F.Multiply(Avx512F.ShiftRightLogical(a.AsUInt64(), 32).AsUInt32(), Avx512F.ShiftRightLogical(b.AsUInt64(), 32).AsUInt32());
+        Vector512<ulong> me = Avx512F.Multiply(pe.AsUInt32(), qinv);
+        Vector512<ulong> mo = Avx512F.Multiply(po.AsUInt32(), qinv);
+        Vector512<ulong> mqe = Avx512F.Multiply(me.AsUInt32(), q);
+        Vector512<ulong> mqo = Avx512F.Multiply(mo.AsUInt32(), q);
+        var hiMask = Vector512.Create(0xFFFFFFFF00000000UL);
+        Vector512<uint> t = Avx512F.Or(Avx512F.ShiftRightLogical(pe, 32), Avx512F.And(po, hiMask)).AsUInt32();
+        Vector512<uint> u = Avx512F.Or(Avx512F.ShiftRightLogical(mqe, 32), Avx512F.And(mqo, hiMask)).AsUInt32();
+        Vector512<uint> r = Avx512F.Subtract(t, u);
+        return Avx512F.Min(r, Avx512F.Add(r, q));
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static Vector512<uint> WAdd(Vector512<uint> a, Vector512<uint> b, Vector512<uint> q)
+    {
+        Vector512<uint> s = Avx512F.Add(a, b);
+        return Avx512F.Min(s, Avx512F.Subtract(s, q));
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static Vector512<uint> WSub(Vector512<uint> a, Vector512<uint> b, Vector512<uint> q)
+    {
+        Vector512<uint> d = Avx512F.Subtract(a, b);
+        return Avx512F.Min(d, Avx512F.Add(d, q));
+    }
+
+    /// <summary>Whether the 512-bit stages are used (stages with butterfly span ≥ 16 and pointwise loops).</summary>
+    internal static bool Use512 => AllowVector512 && AllowVector && Avx512F.IsSupported;
+
+    /// <summary>When false the AVX-512 stages are never used (tests and benchmarks compare both).</summary>
+    internal static bool AllowVector512 = true;
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static Vector256<uint> VAdd(Vector256<uint> a, Vector256<uint> b, Vector256<uint> q)
     {
         Vector256<uint> s = Avx2.Add(a, b);
@@ -262,6 +298,23 @@ internal sealed class NttPrime
     private static unsafe void DifStage(uint* a, int n, int h, uint* w, Vector256<uint> q, Vector256<uint> qinv)
     {
         uint* wh = w + h;
+        if (h >= 16 && Use512)
+        {
+            var q5 = Vector512.Create(q.GetElement(0));
+            var qi5 = Vector512.Create(qinv.GetElement(0));
+            for (int s = 0; s < n; s += 2 * h)
+            {
+                uint* x0 = a + s, y0 = a + s + h;
+                for (int j = 0; j < h; j += 16)
+                {
+                    var x = Avx512F.LoadVector512(x0 + j);
+                    var y = Avx512F.LoadVector512(y0 + j);
+                    Avx512F.Store(x0 + j, WAdd(x, y, q5));
+                    Avx512F.Store(y0 + j, WMontMul(WSub(x, y, q5), Avx512F.LoadVector512(wh + j), q5, qi5));
+                }
+            }
+            return;
+        }
         for (int s = 0; s < n; s += 2 * h)
         {
             uint* x0 = a + s, y0 = a + s + h;
@@ -279,6 +332,23 @@ internal sealed class NttPrime
     private static unsafe void DitStage(uint* a, int n, int h, uint* w, Vector256<uint> q, Vector256<uint> qinv)
     {
         uint* wh = w + h;
+        if (h >= 16 && Use512)
+        {
+            var q5 = Vector512.Create(q.GetElement(0));
+            var qi5 = Vector512.Create(qinv.GetElement(0));
+            for (int s = 0; s < n; s += 2 * h)
+            {
+                uint* x0 = a + s, y0 = a + s + h;
+                for (int j = 0; j < h; j += 16)
+                {
+                    var x = Avx512F.LoadVector512(x0 + j);
+                    var y = WMontMul(Avx512F.LoadVector512(y0 + j), Avx512F.LoadVector512(wh + j), q5, qi5);
+                    Avx512F.Store(x0 + j, WAdd(x, y, q5));
+                    Avx512F.Store(y0 + j, WSub(x, y, q5));
+                }
+            }
+            return;
+        }
         for (int s = 0; s < n; s += 2 * h)
         {
             uint* x0 = a + s, y0 = a + s + h;
@@ -333,6 +403,13 @@ internal sealed class NttPrime
         fixed (uint* d = dst)
         fixed (uint* s = src)
         {
+            if (Use512)
+            {
+                var q = Vector512.Create(Q);
+                var qinv = Vector512.Create(QInv);
+                for (; i + 16 <= n; i += 16)
+                    Avx512F.Store(d + i, WMontMul(Avx512F.LoadVector512(d + i), Avx512F.LoadVector512(s + i), q, qinv));
+            }
             if (Avx2.IsSupported && AllowVector)
             {
                 var q = Vector256.Create(Q);
@@ -370,6 +447,13 @@ internal sealed class NttPrime
         fixed (uint* pa = a)
         fixed (uint* pb = b)
         {
+            if (Use512)
+            {
+                var q = Vector512.Create(Q);
+                var qinv = Vector512.Create(QInv);
+                for (; i + 16 <= n; i += 16)
+                    Avx512F.Store(d + i, WAdd(Avx512F.LoadVector512(d + i), WMontMul(Avx512F.LoadVector512(pa + i), Avx512F.LoadVector512(pb + i), q, qinv), q));
+            }
             if (Avx2.IsSupported && AllowVector)
             {
                 var q = Vector256.Create(Q);
@@ -408,6 +492,13 @@ internal sealed class NttPrime
         fixed (uint* pa = a)
         fixed (uint* pb = b)
         {
+            if (Use512)
+            {
+                var q = Vector512.Create(Q);
+                var qinv = Vector512.Create(QInv);
+                for (; i + 16 <= n; i += 16)
+                    Avx512F.Store(d + i, WMontMul(Avx512F.LoadVector512(pa + i), Avx512F.LoadVector512(pb + i), q, qinv));
+            }
             if (Avx2.IsSupported && AllowVector)
             {
                 var q = Vector256.Create(Q);

@@ -41,6 +41,8 @@ internal sealed class NttMultiplier
     private readonly BigInteger[] _prefixProducts; // q_0⋯q_{i−1} as exact integers, i = 0..k
     private readonly ulong[] _prefixModP;          // q_0⋯q_{i−1} mod p
     private readonly uint[][] _garnerInv;          // _garnerInv[i][j] = q_j^{-1}·R mod q_i (j < i)
+    private readonly bool _finalVector;            // 2^30 ≤ p < 2^31: last Garner step in 32-bit lanes
+    private readonly uint _pInv32, _c1Mont, _c2Mont; // p^{-1} mod 2^32; q0·2^32 mod p; q0q1·2^32 mod p
 
     public NttMultiplier(ulong p)
     {
@@ -61,6 +63,15 @@ internal sealed class NttMultiplier
         _prefixProducts[0] = BigInteger.One;
         for (int i = 0; i < k; i++) _prefixProducts[i + 1] = _prefixProducts[i] * _primes[i].Q;
         for (int i = 0; i <= k; i++) _prefixModP[i] = (ulong)(_prefixProducts[i] % p);
+        if (!_direct && k >= 3 && p >= (1UL << 30) && p < (1UL << 31))
+        {
+            _finalVector = true;
+            uint inv = 1;
+            for (int i = 0; i < 5; i++) inv *= 2 - (uint)p * inv;
+            _pInv32 = inv;
+            _c1Mont = (uint)((_prefixModP[1] << 32) % p);
+            _c2Mont = (uint)((UInt128)_prefixModP[2] * (1UL << 32) % p);
+        }
         _maxTerms = new long[k + 1];
         var sq = new BigInteger(p - 1) * (p - 1);
         for (int i = 1; i <= k; i++)
@@ -311,6 +322,10 @@ internal sealed class NttMultiplier
         var i21 = Vector256.Create(_garnerInv[2][1]);
         ulong c1 = _prefixModP[1], c2 = _prefixModP[2];
         var mod = _mod;
+        var vp = Vector256.Create((uint)_mod.P);
+        var vpinv = Vector256.Create(_pInv32);
+        var vc1 = Vector256.Create(_c1Mont);
+        var vc2 = Vector256.Create(_c2Mont);
         uint* t0s = stackalloc uint[8];
         uint* t1s = stackalloc uint[8];
         uint* t2s = stackalloc uint[8];
@@ -330,6 +345,20 @@ internal sealed class NttMultiplier
                 x2 = NttPrime.VMontMul(NttPrime.VSub(x2, t0m2, q2), i20, q2, qi2);
                 var t1m2 = Avx2.Min(t1, Avx2.Subtract(t1, q2));
                 var t2 = NttPrime.VMontMul(NttPrime.VSub(x2, t1m2, q2), i21, q2, qi2);
+                if (_finalVector)
+                {
+                    // 2^30 ≤ p < 2^31: t0 < p already; t1·q0 and t2·q0q1 mod p by Montgomery modulo p
+                    // (constants pre-multiplied by 2^32), then two modular additions, all in lanes.
+                    var u1 = NttPrime.VMontMul(t1, vc1, vp, vpinv);
+                    var u2 = NttPrime.VMontMul(t2, vc2, vp, vpinv);
+                    var sum = NttPrime.VAdd(NttPrime.VAdd(t0, u1, vp), u2, vp);
+                    fixed (ulong* d = dst)
+                    {
+                        Avx.Store(d + j, Avx2.ConvertToVector256Int64(sum.GetLower()).AsUInt64());
+                        Avx.Store(d + j + 4, Avx2.ConvertToVector256Int64(sum.GetUpper()).AsUInt64());
+                    }
+                    continue;
+                }
                 Avx.Store(t0s, t0); Avx.Store(t1s, t1); Avx.Store(t2s, t2);
                 for (int u = 0; u < 8; u++)
                     dst[j + u] = mod.Reduce64(t0s[u] + t1s[u] * c1 + t2s[u] * c2);

@@ -1,0 +1,272 @@
+using System.Numerics;
+using Integrable.Numbers;
+
+namespace Integrable.Kernels.LinearAlgebra;
+
+/// <summary>An integer matrix B obtained from a rational matrix A by clearing denominators row by row:
+/// row i of B is L_i times row i of A, where L_i is the least common multiple of the denominators of
+/// that row. B has the same rank profile, reduced row echelon form and right kernel as A.</summary>
+/// <remarks>Entries are stored as words when every entry fits (<see cref="Small"/>), otherwise as big
+/// integers with a pool of magnitude words used for fast reduction modulo word-size primes and for the
+/// exact kernel checks.</remarks>
+internal sealed class IntegerRows
+{
+    private readonly ulong[]? _words;     // magnitudes of the big entries, little-endian words
+    private readonly int[]? _start;       // entry e occupies _words[_start[e] .. _start[e + 1])
+    private readonly bool[]? _negative;
+
+    private IntegerRows(int rows, int cols, long[]? small, BigInteger[]? big, BigInteger[] rowScales)
+    {
+        Rows = rows;
+        Cols = cols;
+        Small = small;
+        Big = big;
+        RowScales = rowScales;
+        if (small is not null)
+        {
+            long maxAbs = 0;
+            foreach (var v in small) { long a = v < 0 ? -v : v; if (a > maxAbs) maxAbs = a; }
+            MaxBits = 64 - BitOperations.LeadingZeroCount((ulong)maxAbs);
+            TotalWords = small.Length;
+            return;
+        }
+        int n = big!.Length;
+        _start = new int[n + 1];
+        _negative = new bool[n];
+        long total = 0;
+        long maxBits = 0;
+        for (int e = 0; e < n; e++)
+        {
+            _start[e] = checked((int)total);
+            total += WordArithmetic.WordCount(big[e]);
+            _negative[e] = big[e].Sign < 0;
+            long bits = big[e].Sign < 0 ? (-big[e]).GetBitLength() : big[e].GetBitLength();
+            if (bits > maxBits) maxBits = bits;
+        }
+        _start[n] = checked((int)total);
+        _words = new ulong[total];
+        for (int e = 0; e < n; e++) WordArithmetic.WriteMagnitude(big[e], _words.AsSpan(_start[e], _start[e + 1] - _start[e]));
+        MaxBits = maxBits;
+        TotalWords = total;
+    }
+
+    public int Rows { get; }
+    public int Cols { get; }
+
+    /// <summary>Row-major entries when every one fits in a word; null otherwise.</summary>
+    public long[]? Small { get; }
+
+    /// <summary>Row-major entries as big integers when some entry does not fit in a word; null otherwise.</summary>
+    public BigInteger[]? Big { get; }
+
+    /// <summary>The factors L_i by which the rows of the rational matrix were multiplied.</summary>
+    public BigInteger[] RowScales { get; }
+
+    /// <summary>Largest bit length of an entry.</summary>
+    public long MaxBits { get; }
+
+    /// <summary>Total number of words of all entries (a size measure for cost estimates).</summary>
+    public long TotalWords { get; }
+
+    /// <summary>Entry (i, j) as a big integer.</summary>
+    public BigInteger Entry(int i, int j) => Small is not null ? Small[i * Cols + j] : Big![i * Cols + j];
+
+    /// <summary>All entries as big integers (a fresh row-major array).</summary>
+    public BigInteger[] ToBigIntegers()
+    {
+        var r = new BigInteger[Rows * Cols];
+        if (Small is not null) for (int e = 0; e < r.Length; e++) r[e] = Small[e];
+        else Big!.CopyTo(r, 0);
+        return r;
+    }
+
+    /// <summary>Clears the denominators of a rational matrix row by row.</summary>
+    public static IntegerRows FromRational(ReadOnlySpan<Rational> a, int rows, int cols)
+    {
+        var small = TryClearSmall(a, rows, cols, out var smallScales);
+        if (small is not null) return new IntegerRows(rows, cols, small, null, smallScales!);
+        var big = new BigInteger[rows * cols];
+        var scales = new BigInteger[rows];
+        var order = new int[cols];
+        var bits = new long[cols];
+        for (int i = 0; i < rows; i++)
+        {
+            var row = a.Slice(i * cols, cols);
+            // The lcm of the denominators, largest first: later ones then mostly divide it already,
+            // which a remainder test (cheap when the sizes are close) detects without a gcd.
+            for (int j = 0; j < cols; j++) { order[j] = j; bits[j] = row[j].IsInteger ? 0 : row[j].Denominator.GetBitLength(); }
+            Array.Sort(bits, order);
+            BigInteger l = BigInteger.One;
+            for (int t = cols - 1; t >= 0; t--)
+            {
+                if (bits[t] == 0) break;
+                var d = row[order[t]].Denominator;
+                if (l.IsOne) { l = d; continue; }
+                if (BigInteger.Remainder(l, d).IsZero) continue;
+                var g = BigInteger.GreatestCommonDivisor(l, d);
+                l = l / g * d;
+            }
+            scales[i] = l;
+            for (int j = 0; j < cols; j++)
+            {
+                var x = row[j];
+                if (x.IsZero) continue;
+                if (x.IsInteger) { big[i * cols + j] = l.IsOne ? x.Numerator : x.Numerator * l; continue; }
+                var d = x.Denominator;
+                big[i * cols + j] = d == l ? x.Numerator : x.Numerator * (l / d);
+            }
+        }
+        return new IntegerRows(rows, cols, null, big, scales);
+    }
+
+    /// <summary>An integer matrix given directly (no scaling).</summary>
+    public static IntegerRows FromIntegers(BigInteger[] entries, int rows, int cols)
+    {
+        var scales = new BigInteger[rows];
+        Array.Fill(scales, BigInteger.One);
+        bool allSmall = true;
+        foreach (var v in entries) if (v < long.MinValue + 1 || v > long.MaxValue) { allSmall = false; break; }
+        if (allSmall)
+        {
+            var s = new long[entries.Length];
+            for (int e = 0; e < s.Length; e++) s[e] = (long)entries[e];
+            return new IntegerRows(rows, cols, s, null, scales);
+        }
+        return new IntegerRows(rows, cols, null, (BigInteger[])entries.Clone(), scales);
+    }
+
+    private static long[]? TryClearSmall(ReadOnlySpan<Rational> a, int rows, int cols, out BigInteger[]? scales)
+    {
+        scales = null;
+        var b = new long[rows * cols];
+        var sc = new BigInteger[rows];
+        for (int i = 0; i < rows; i++)
+        {
+            long l = 1;
+            for (int j = 0; j < cols; j++)
+            {
+                if (!a[i * cols + j].TryGetSmall(out _, out long d)) return null;
+                if (d == 1) continue;
+                long g = (long)IntegerMath.Gcd(l, d);
+                if (!TryMultiply(l / g, d, out l)) return null;
+            }
+            sc[i] = l;
+            for (int j = 0; j < cols; j++)
+            {
+                a[i * cols + j].TryGetSmall(out long n, out long d);
+                if (!TryMultiply(n, l / d, out long v) || v == long.MinValue) return null;
+                b[i * cols + j] = v;
+            }
+        }
+        scales = sc;
+        return b;
+    }
+
+    private static bool TryMultiply(long x, long y, out long product)
+    {
+        long hi = Math.BigMul(x, y, out product);
+        return hi == (product >> 63);
+    }
+
+    /// <summary>Writes B mod p in column-major order: entry (i, j) at j·Rows + i.</summary>
+    public void ReduceColumnMajor(ModularReducer reducer, Span<ulong> destination)
+    {
+        int rows = Rows, cols = Cols;
+        if (Small is not null)
+        {
+            var s = Small;
+            for (int i = 0; i < rows; i++)
+                for (int j = 0; j < cols; j++)
+                    destination[j * rows + i] = reducer.FromSigned(s[i * cols + j]);
+            return;
+        }
+        var words = _words!;
+        var start = _start!;
+        var neg = _negative!;
+        for (int i = 0; i < rows; i++)
+            for (int j = 0; j < cols; j++)
+            {
+                int e = i * cols + j;
+                destination[j * rows + i] = reducer.FromWords(words.AsSpan(start[e], start[e + 1] - start[e]), neg[e]);
+            }
+    }
+
+    /// <summary>Exact test that B·w = 0 for an integer vector w given by its support and values.</summary>
+    /// <param name="support">Column indices of the non-zero entries of w.</param>
+    /// <param name="values">The entries of w on <paramref name="support"/>.</param>
+    public bool Annihilates(ReadOnlySpan<int> support, ReadOnlySpan<BigInteger> values)
+    {
+        int n = support.Length;
+        if (n == 0) return true;
+        long maxValueBits = 0;
+        bool valuesSmall = true;
+        foreach (var v in values)
+        {
+            long b = v.Sign < 0 ? (-v).GetBitLength() : v.GetBitLength();
+            if (b > maxValueBits) maxValueBits = b;
+            if (b > 62) valuesSmall = false;
+        }
+        int logN = 64 - BitOperations.LeadingZeroCount((ulong)n);
+        if (Small is not null && valuesSmall && MaxBits + maxValueBits + logN + 1 <= 126)
+        {
+            var w = new long[n];
+            for (int t = 0; t < n; t++) w[t] = (long)values[t];
+            var s = Small;
+            for (int i = 0; i < Rows; i++)
+            {
+                Int128 acc = 0;
+                int baseIndex = i * Cols;
+                for (int t = 0; t < n; t++) acc += (Int128)s[baseIndex + support[t]] * w[t];
+                if (acc != 0) return false;
+            }
+            return true;
+        }
+        return AnnihilatesWords(support, values, maxValueBits, logN);
+    }
+
+    private bool AnnihilatesWords(ReadOnlySpan<int> support, ReadOnlySpan<BigInteger> values, long maxValueBits, int logN)
+    {
+        int n = support.Length;
+        // Value magnitudes as words.
+        var vStart = new int[n + 1];
+        var vNeg = new bool[n];
+        int total = 0;
+        for (int t = 0; t < n; t++) { vStart[t] = total; total += WordArithmetic.WordCount(values[t]); vNeg[t] = values[t].Sign < 0; }
+        vStart[n] = total;
+        var vWords = new ulong[total];
+        for (int t = 0; t < n; t++) WordArithmetic.WriteMagnitude(values[t], vWords.AsSpan(vStart[t], vStart[t + 1] - vStart[t]));
+        int accLen = (int)((MaxBits + maxValueBits + logN + 2) / 64) + 2;
+        var pos = new ulong[accLen];
+        var neg = new ulong[accLen];
+        var one = new ulong[1];
+        for (int i = 0; i < Rows; i++)
+        {
+            pos.AsSpan().Clear();
+            neg.AsSpan().Clear();
+            for (int t = 0; t < n; t++)
+            {
+                int e = i * Cols + support[t];
+                ReadOnlySpan<ulong> x;
+                bool xNeg;
+                if (Small is not null)
+                {
+                    long v = Small[e];
+                    if (v == 0) continue;
+                    one[0] = IntegerMath.UnsignedAbs(v);
+                    x = one;
+                    xNeg = v < 0;
+                }
+                else
+                {
+                    x = _words.AsSpan(_start![e], _start[e + 1] - _start[e]);
+                    if (x.Length == 0) continue;
+                    xNeg = _negative![e];
+                }
+                var y = vWords.AsSpan(vStart[t], vStart[t + 1] - vStart[t]);
+                WordArithmetic.AddMul(xNeg != vNeg[t] ? neg : pos, x, y);
+            }
+            if (!pos.AsSpan().SequenceEqual(neg)) return false;
+        }
+        return true;
+    }
+}

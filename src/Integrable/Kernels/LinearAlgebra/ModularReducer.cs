@@ -1,0 +1,156 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+using Integrable.Numbers;
+
+namespace Integrable.Kernels.LinearAlgebra;
+
+/// <summary>Word-level modular arithmetic for the elimination kernels: reduction of arbitrary 64- and
+/// 128-bit values and dot products with delayed reduction, for any prime p &lt; 2^62.</summary>
+/// <remarks>
+/// <see cref="PrimeField.Reduce"/> needs its argument below p²; the kernels instead accumulate up to
+/// sixteen products of residues in a 128-bit accumulator and fold its high word every so often, so they
+/// reduce values of any size with a 64-bit Barrett step (<see cref="Reduce64"/>) and the constant
+/// 2^64 mod p.
+/// </remarks>
+internal readonly struct ModularReducer
+{
+    /// <summary>The field.</summary>
+    public readonly PrimeField Field;
+
+    /// <summary>The prime p.</summary>
+    public readonly ulong P;
+
+    private readonly ulong _m64;     // floor((2^64 - 1) / p)
+    private readonly ulong _r64;     // 2^64 mod p
+
+    public ModularReducer(PrimeField field)
+    {
+        Field = field;
+        P = field.Modulus;
+        _m64 = ulong.MaxValue / P;
+        _r64 = (ulong)((UInt128.One << 64) % P);
+    }
+
+    /// <summary>x mod p for any word x.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong Reduce64(ulong x)
+    {
+        ulong q = Math.BigMul(x, _m64, out _);
+        ulong r = x - q * P;
+        // q is at most two below floor(x/p).
+        while (r >= P) r -= P;
+        return r;
+    }
+
+    /// <summary>(hi·2^64 + lo) mod p for any 128-bit value.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong Reduce128(ulong hi, ulong lo)
+    {
+        ulong h = Reduce64(hi);
+        ulong l = Reduce64(lo);
+        ulong t = h == 0 ? 0 : Field.Multiply(h, _r64);
+        ulong s = t + l;
+        return s >= P ? s - P : s;
+    }
+
+    /// <summary>a·b mod p for residues a, b.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong Multiply(ulong a, ulong b) => Field.Multiply(a, b);
+
+    /// <summary>a − b mod p for residues a, b.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong Subtract(ulong a, ulong b) => a >= b ? a - b : a + P - b;
+
+    /// <summary>a + b mod p for residues a, b.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong Add(ulong a, ulong b)
+    {
+        ulong s = a + b;
+        return s >= P ? s - P : s;
+    }
+
+    /// <summary>The residue of a signed word.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong FromSigned(long v)
+    {
+        if (v >= 0) return (ulong)v < P ? (ulong)v : Reduce64((ulong)v);
+        ulong m = IntegerMath.UnsignedAbs(v);
+        ulong r = m < P ? m : Reduce64(m);
+        return r == 0 ? 0 : P - r;
+    }
+
+    /// <summary>The residue of a magnitude given by little-endian 64-bit words, negated when <paramref name="negative"/>.</summary>
+    public ulong FromWords(ReadOnlySpan<ulong> words, bool negative)
+    {
+        ulong r = 0;
+        if (P > uint.MaxValue)
+        {
+            // r < p, so r·2^32 + w < p·2^32 < p² and the field's Barrett step applies.
+            for (int i = words.Length - 1; i >= 0; i--)
+            {
+                ulong w = words[i];
+                r = Field.Reduce(r >> 32, (r << 32) | (w >> 32));
+                r = Field.Reduce(r >> 32, (r << 32) | (w & 0xFFFFFFFFUL));
+            }
+        }
+        else
+        {
+            for (int i = words.Length - 1; i >= 0; i--)
+            {
+                ulong w = words[i];
+                r = Reduce64((r << 32) | (w >> 32));
+                r = Reduce64((r << 32) | (w & 0xFFFFFFFFUL));
+            }
+        }
+        return negative && r != 0 ? P - r : r;
+    }
+
+    /// <summary>Σ a[i]·b[i] mod p over residues (delayed reduction: one fold per sixteen products).</summary>
+    public ulong Dot(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
+    {
+        int n = a.Length;
+        if (n == 0) return 0;
+        if (b.Length < n) throw new ArgumentException("dot product of spans of different lengths");
+        ref ulong ra = ref MemoryMarshal.GetReference(a);
+        ref ulong rb = ref MemoryMarshal.GetReference(b);
+        // Two accumulators (even and odd terms). Invariant after a fold: hi < p < 2^62, so the value is
+        // below 2^126; eight more products (each < 2^124) keep it below 2^128.
+        ulong h0 = 0, l0 = 0, h1 = 0, l1 = 0;
+        int i = 0;
+        while (n - i >= 16)
+        {
+            int end = i + 16;
+            for (; i < end; i += 2)
+            {
+                ulong ph = Math.BigMul(Unsafe.Add(ref ra, i), Unsafe.Add(ref rb, i), out ulong pl);
+                l0 += pl;
+                h0 += ph + (l0 < pl ? 1UL : 0UL);
+                ph = Math.BigMul(Unsafe.Add(ref ra, i + 1), Unsafe.Add(ref rb, i + 1), out pl);
+                l1 += pl;
+                h1 += ph + (l1 < pl ? 1UL : 0UL);
+            }
+            h0 = Reduce64(h0);
+            h1 = Reduce64(h1);
+        }
+        for (; i + 1 < n; i += 2)
+        {
+            ulong ph = Math.BigMul(Unsafe.Add(ref ra, i), Unsafe.Add(ref rb, i), out ulong pl);
+            l0 += pl;
+            h0 += ph + (l0 < pl ? 1UL : 0UL);
+            ph = Math.BigMul(Unsafe.Add(ref ra, i + 1), Unsafe.Add(ref rb, i + 1), out pl);
+            l1 += pl;
+            h1 += ph + (l1 < pl ? 1UL : 0UL);
+        }
+        if (i < n)
+        {
+            ulong ph = Math.BigMul(Unsafe.Add(ref ra, i), Unsafe.Add(ref rb, i), out ulong pl);
+            l0 += pl;
+            h0 += ph + (l0 < pl ? 1UL : 0UL);
+        }
+        h0 = Reduce64(h0);
+        h1 = Reduce64(h1);
+        ulong lo = l0 + l1;
+        ulong hi = h0 + h1 + (lo < l0 ? 1UL : 0UL);   // h0 + h1 < 2p < 2^63: no overflow
+        return Reduce128(hi, lo);
+    }
+}

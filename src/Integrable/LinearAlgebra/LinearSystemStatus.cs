@@ -1,0 +1,15 @@
+namespace Integrable.LinearAlgebra;
+
+/// <summary>What the solution set of a linear system A·x = b looks like.</summary>
+public enum LinearSystemStatus
+{
+    /// <summary>Exactly one solution (A has full column rank and b lies in its column space).</summary>
+    Unique,
+
+    /// <summary>Infinitely many solutions (over Q) or several (over Z/pZ): a particular solution plus
+    /// any vector of the non-trivial kernel of A.</summary>
+    Underdetermined,
+
+    /// <summary>No solution: b does not lie in the column space of A.</summary>
+    Inconsistent,
+}

@@ -1,0 +1,354 @@
+using System.Diagnostics;
+using System.Numerics;
+using Integrable.Kernels.LinearAlgebra;
+using Integrable.Numbers;
+
+namespace Integrable.LinearAlgebra;
+
+/// <summary>Exact reduced row echelon forms and determinants over Q: the dispatcher between the
+/// multimodular method and fraction-free elimination, and the multimodular method itself.</summary>
+/// <remarks>
+/// <para>Both methods first clear denominators row by row (<see cref="IntegerRows"/>), which changes
+/// neither the rank profile, nor the reduced form, nor the kernel.</para>
+/// <para>Multimodular method. For primes p from the supply the integer matrix is reduced mod p and
+/// eliminated (<see cref="ModularEchelon"/>). A prime whose rank is lower, or whose pivot columns are
+/// lexicographically later, than another prime's is unlucky (p divides some minor) and is discarded;
+/// images with the same profile are combined by Chinese remaindering and the free-column entries are
+/// rationally reconstructed, column by column with a common denominator. A reconstruction is accepted
+/// only after an exact check over Z: every kernel vector read off the candidate form is multiplied by
+/// the integer matrix and must give zero. That check also proves the result: the rank mod p is at most
+/// the rank over Q, so the kernel has dimension at most cols − r, and the cols − r verified vectors
+/// (independent, the identity on the free columns) span it; as each vector vanishes beyond its free
+/// column, the free columns are exactly the non-pivot columns over Q and the candidate is the reduced
+/// form over Q. When the check is cheap compared with one more prime it is tried as soon as a
+/// reconstruction exists (one prime is enough for small outputs); otherwise, and after any failed
+/// check, two consecutive primes must reconstruct the same values first (early termination). If the
+/// number of primes that the Hadamard bound guarantees (plus a margin) is exhausted, fraction-free
+/// elimination finishes the job, so a wrong image is never returned.</para>
+/// </remarks>
+internal static class RationalElimination
+{
+    // Dispatcher. Fraction-free elimination costs about m·c·r big-integer operations on numbers that
+    // grow to r times the entry size; the multimodular method costs, per prime, one reduction of every
+    // entry plus m·c·r word operations, plus reconstruction and the exact check, and usually needs only
+    // one or two primes because reconstruction stops as soon as the result is reached (output-sensitive).
+    // Measured on this code (benchmarks/Integrable.Benchmarks/LinearAlgebraBenchmarks.cs): fraction-free
+    // wins only for tiny matrices, where the fixed costs of the modular machinery (field setup, arrays,
+    // reconstruction) dominate; it also handles a single row or column. Everything else goes multimodular.
+    internal const int FractionFreeMaxCells = 36;
+
+    // Determinants: fraction-free up to this order; above it the multimodular method with the Hadamard
+    // bound (a proven bound, so no check is needed) is faster.
+    internal const int DeterminantFractionFreeMaxOrder = 10;
+
+    /// <summary>The verified reduced row echelon data of a row-major rational matrix.</summary>
+    public static EchelonData<Rational> Echelon(ReadOnlySpan<Rational> data, int rows, int cols, EliminationOptions options)
+    {
+        if (rows == 0 || cols == 0)
+            return new EchelonData<Rational>(rows, cols, [], EchelonData<Rational>.Complement([], cols), []);
+        var diag = options.Diagnostics;
+        var sw = Stopwatch.StartNew();
+        var b = IntegerRows.FromRational(data, rows, cols);
+        if (diag is not null) diag.ClearingTime += sw.Elapsed;
+        return Echelon(b, options);
+    }
+
+    /// <summary>The verified reduced row echelon data of an integer matrix.</summary>
+    public static EchelonData<Rational> Echelon(IntegerRows b, EliminationOptions options)
+    {
+        var method = options.Method;
+        if (method == EliminationMethod.Auto)
+            method = b.Rows * b.Cols <= FractionFreeMaxCells || b.Rows == 1 || b.Cols == 1
+                ? EliminationMethod.FractionFree : EliminationMethod.Multimodular;
+        if (options.Diagnostics is not null) options.Diagnostics.MethodUsed = method;
+        if (method == EliminationMethod.FractionFree) return EchelonFractionFree(b);
+        return EchelonMultimodular(b, options) ?? FallBack(b, options);
+    }
+
+    private static EchelonData<Rational> FallBack(IntegerRows b, EliminationOptions options)
+    {
+        if (options.Diagnostics is not null) options.Diagnostics.FellBackToFractionFree = true;
+        return EchelonFractionFree(b);
+    }
+
+    /// <summary>Fraction-free (Bareiss) elimination; exact by construction.</summary>
+    public static EchelonData<Rational> EchelonFractionFree(IntegerRows b)
+    {
+        var ff = FractionFreeElimination.Compute(b.ToBigIntegers(), b.Rows, b.Cols);
+        var free = EchelonData<Rational>.Complement(ff.PivotColumns, b.Cols);
+        return new EchelonData<Rational>(b.Rows, b.Cols, ff.PivotColumns, free, ff.ReducedFreeEntries(free));
+    }
+
+    /// <summary>The multimodular method; null when the prime limit is exhausted.</summary>
+    private static EchelonData<Rational>? EchelonMultimodular(IntegerRows b, EliminationOptions options)
+    {
+        int m = b.Rows, c = b.Cols;
+        var diag = options.Diagnostics;
+        int limit = options.PrimeLimit ?? GuaranteedPrimeCount(b) + 8;
+        var image = new ulong[m * c];
+        int[]? bestPivots = null;
+        int[]? free = null;
+        BigInteger[]? residues = null;
+        BigInteger modulus = BigInteger.One;
+        Rational[]? previous = null;
+        bool mayVerifyEarly = true;
+        var sw = new Stopwatch();
+        for (int index = 0, used = 0; used < limit; index++)
+        {
+            ulong p = options.PrimeSequence(index);
+            PrimeField field;
+            try { field = new PrimeField(p); }
+            catch (ArgumentException) { throw new InvalidOperationException($"prime supply returned {p}, which is not a prime below 2^62"); }
+            used++;
+            if (diag is not null) diag.PrimesUsed++;
+            sw.Restart();
+            var reducer = new ModularReducer(field);
+            b.ReduceColumnMajor(reducer, image);
+            var ech = ModularEchelon.Compute(image, m, c, reducer);
+            int cmp = bestPivots is null ? 1 : CompareProfiles(ech.PivotColumns, bestPivots);
+            if (cmp < 0)
+            {
+                if (diag is not null) { diag.UnluckyPrimes++; diag.ModularTime += sw.Elapsed; }
+                continue;
+            }
+            if (cmp > 0)
+            {
+                if (bestPivots is not null && diag is not null) diag.UnluckyPrimes += 1;
+                bestPivots = ech.PivotColumns;
+                free = ech.FreeColumns();
+                residues = null;
+                modulus = BigInteger.One;
+                previous = null;
+            }
+            var e = ech.ReducedFreeEntries(free!);
+            if (diag is not null) diag.ModularTime += sw.Elapsed;
+            int r = bestPivots!.Length, nf = free!.Length;
+            if (nf == 0)
+            {
+                // Full column rank mod p, hence over Q: the reduced form is the identity on top.
+                return new EchelonData<Rational>(m, c, bestPivots, free, []);
+            }
+            sw.Restart();
+            Accumulate(ref residues, ref modulus, e, p);
+            bool ok = TryReconstruct(residues!, modulus, r, nf, out var candidate);
+            if (diag is not null) diag.ReconstructionTime += sw.Elapsed;
+            if (!ok)
+            {
+                if (diag is not null) diag.ReconstructionFailures++;
+                previous = null;
+                continue;
+            }
+            bool stable = previous is not null && candidate.AsSpan().SequenceEqual(previous);
+            previous = candidate;
+            if (!stable && !(mayVerifyEarly && VerificationIsCheap(b, candidate, r, nf))) continue;
+            sw.Restart();
+            bool verified = Verify(b, bestPivots, free, candidate);
+            if (diag is not null) { diag.Verifications++; diag.VerificationTime += sw.Elapsed; }
+            if (verified) return new EchelonData<Rational>(m, c, bestPivots, free, candidate);
+            if (diag is not null) diag.VerificationFailures++;
+            mayVerifyEarly = false;
+        }
+        return null;
+    }
+
+    /// <summary>+1 when <paramref name="candidate"/> is a better rank profile than <paramref name="best"/>
+    /// (higher rank, or same rank and lexicographically earlier pivots), 0 when equal, −1 when worse.</summary>
+    internal static int CompareProfiles(int[] candidate, int[] best)
+    {
+        if (candidate.Length != best.Length) return candidate.Length > best.Length ? 1 : -1;
+        for (int k = 0; k < candidate.Length; k++)
+            if (candidate[k] != best[k]) return candidate[k] < best[k] ? 1 : -1;
+        return 0;
+    }
+
+    /// <summary>Number of primes after which the reconstruction of the reduced form is certain: every
+    /// entry is a quotient of two r×r minors of B, each at most H = Π ‖B_i‖ over the largest rows
+    /// (Hadamard), and reconstruction is unique once the modulus exceeds 2H².</summary>
+    internal static int GuaranteedPrimeCount(IntegerRows b)
+    {
+        double log2H = HadamardLog2(b, Math.Min(b.Rows, b.Cols));
+        return (int)Math.Ceiling((2 * log2H + 2) / 61.0) + 1;
+    }
+
+    /// <summary>An upper bound for log2 of the product of the <paramref name="count"/> largest Euclidean row norms.</summary>
+    internal static double HadamardLog2(IntegerRows b, int count)
+    {
+        var norms = new double[b.Rows];
+        for (int i = 0; i < b.Rows; i++)
+        {
+            // log2 ‖row‖ ≤ ½ log2 Σ 2^(2·bits), computed relative to the largest term.
+            long maxBits = 0;
+            var bits = new long[b.Cols];
+            for (int j = 0; j < b.Cols; j++)
+            {
+                var x = b.Entry(i, j);
+                bits[j] = x.IsZero ? -1 : (x.Sign < 0 ? (-x).GetBitLength() : x.GetBitLength());
+                if (bits[j] > maxBits) maxBits = bits[j];
+            }
+            double sum = 0;
+            foreach (var bt in bits) if (bt >= 0) sum += Math.Pow(2, 2.0 * (bt - maxBits));
+            norms[i] = sum == 0 ? 0 : maxBits + 0.5 * Math.Log2(sum);
+        }
+        Array.Sort(norms);
+        double total = 0;
+        for (int t = 0; t < count && t < norms.Length; t++) total += Math.Max(0, norms[norms.Length - 1 - t]);
+        return total;
+    }
+
+    private static void Accumulate(ref BigInteger[]? residues, ref BigInteger modulus, ulong[] image, ulong p)
+    {
+        if (residues is null)
+        {
+            residues = new BigInteger[image.Length];
+            for (int t = 0; t < image.Length; t++) residues[t] = image[t];
+            modulus = p;
+            return;
+        }
+        // Garner step: x = r + M·((s − r)·M⁻¹ mod p).
+        var field = new PrimeField(p);
+        ulong inv = field.Inverse((ulong)(modulus % p));
+        for (int t = 0; t < image.Length; t++)
+        {
+            ulong rp = (ulong)(residues[t] % p);
+            ulong diff = field.Subtract(image[t], rp);
+            if (diff != 0) residues[t] += modulus * field.Multiply(diff, inv);
+        }
+        modulus *= p;
+    }
+
+    /// <summary>Rational reconstruction of every entry (row-major r × nf), column by column with a
+    /// running common denominator, within the symmetric bounds N = D = ⌊√(M/2)⌋.</summary>
+    private static bool TryReconstruct(BigInteger[] residues, BigInteger modulus, int r, int nf, out Rational[] values)
+    {
+        values = new Rational[r * nf];
+        var bound = RationalReconstruction.Sqrt(modulus / 2);
+        var half = modulus >> 1;
+        for (int q = 0; q < nf; q++)
+        {
+            BigInteger den = BigInteger.One;
+            for (int k = 0; k < r; k++)
+            {
+                var a = residues[k * nf + q];
+                if (a.IsZero) continue;
+                var y = den.IsOne ? a : a * den % modulus;
+                var s = y > half ? y - modulus : y;
+                if (BigInteger.Abs(s) <= bound)
+                {
+                    values[k * nf + q] = new Rational(s, den);
+                    continue;
+                }
+                if (!RationalReconstruction.TryReconstruct(y, modulus, bound, bound / den, out var frac)) return false;
+                den *= frac.Denominator;
+                values[k * nf + q] = new Rational(frac.Numerator, den);
+            }
+        }
+        return true;
+    }
+
+    /// <summary>Whether the exact check is cheaper than one more prime (then it runs right away).</summary>
+    private static bool VerificationIsCheap(IntegerRows b, Rational[] candidate, int r, int nf)
+    {
+        // Check: for each free column, m rows times the support, each a product of an entry of B by a
+        // kernel entry. One more prime: reducing every entry (about four multiplications per word) and
+        // m·c·r word multiplications.
+        long valueWords = 0;
+        int nonZero = 0;
+        foreach (var v in candidate)
+        {
+            if (v.IsZero) continue;
+            nonZero++;
+            valueWords += v.IsSmall ? 1 : 1 + (v.Numerator.GetBitLength() + v.Denominator.GetBitLength()) / 64;
+        }
+        double avgEntryWords = Math.Max(1.0, (double)b.TotalWords / Math.Max(1, b.Rows * b.Cols));
+        double avgValueWords = nonZero == 0 ? 1 : (double)valueWords / nonZero + 1;
+        double check = (double)b.Rows * (nonZero + nf) * avgEntryWords * avgValueWords;
+        double prime = 4.0 * b.TotalWords + (double)b.Rows * b.Cols * r;
+        return check <= prime;
+    }
+
+    /// <summary>The exact check: B·w = 0 for the integer multiple w of every kernel vector read off the candidate.</summary>
+    private static bool Verify(IntegerRows b, int[] pivots, int[] free, Rational[] e)
+    {
+        int r = pivots.Length, nf = free.Length;
+        var support = new int[r + 1];
+        var values = new BigInteger[r + 1];
+        for (int q = 0; q < nf; q++)
+        {
+            BigInteger l = BigInteger.One;
+            for (int k = 0; k < r; k++)
+            {
+                var x = e[k * nf + q];
+                if (x.IsZero || x.IsInteger) continue;
+                var d = x.Denominator;
+                l = l / BigInteger.GreatestCommonDivisor(l, d) * d;
+            }
+            int n = 0;
+            for (int k = 0; k < r; k++)
+            {
+                var x = e[k * nf + q];
+                if (x.IsZero) continue;
+                support[n] = pivots[k];
+                values[n] = -(x.Numerator * (l / x.Denominator));
+                n++;
+            }
+            support[n] = free[q];
+            values[n] = l;
+            n++;
+            if (!b.Annihilates(support.AsSpan(0, n), values.AsSpan(0, n))) return false;
+        }
+        return true;
+    }
+
+    /// <summary>The determinant of a square row-major rational matrix.</summary>
+    public static Rational Determinant(ReadOnlySpan<Rational> data, int n, EliminationOptions options)
+    {
+        if (n == 0) return Rational.One;
+        var b = IntegerRows.FromRational(data, n, n);
+        BigInteger scale = BigInteger.One;
+        foreach (var s in b.RowScales) scale *= s;
+        var method = options.Method;
+        if (method == EliminationMethod.Auto)
+            method = n <= DeterminantFractionFreeMaxOrder ? EliminationMethod.FractionFree : EliminationMethod.Multimodular;
+        if (options.Diagnostics is not null) options.Diagnostics.MethodUsed = method;
+        BigInteger det = method == EliminationMethod.FractionFree
+            ? FractionFreeElimination.Compute(b.ToBigIntegers(), n, n).Determinant()
+            : DeterminantMultimodular(b, options);
+        return new Rational(det, scale);
+    }
+
+    /// <summary>det B by Chinese remaindering up to twice the Hadamard bound (a proven bound, so the
+    /// result is exact without a further check).</summary>
+    private static BigInteger DeterminantMultimodular(IntegerRows b, EliminationOptions options)
+    {
+        int n = b.Rows;
+        double log2H = HadamardLog2(b, n);
+        var target = BigInteger.One << (int)Math.Ceiling(log2H + 2);   // modulus must exceed 2H
+        var image = new ulong[n * n];
+        BigInteger residue = BigInteger.Zero, modulus = BigInteger.One;
+        int zeros = 0;
+        var diag = options.Diagnostics;
+        for (int index = 0; modulus < target; index++)
+        {
+            ulong p = options.PrimeSequence(index);
+            var field = new PrimeField(p);
+            var reducer = new ModularReducer(field);
+            b.ReduceColumnMajor(reducer, image);
+            var ech = ModularEchelon.Compute(image, n, n, reducer);
+            if (diag is not null) diag.PrimesUsed++;
+            ulong d = ech.Determinant();
+            if (d == 0 && ++zeros == 2 && residue.IsZero)
+            {
+                // Two primes say singular: settle it with the verified rank (exact), which is much
+                // cheaper than running up to the bound.
+                var echQ = Echelon(b, options);
+                if (echQ.Rank < n) return BigInteger.Zero;
+            }
+            if (modulus.IsOne) { residue = d; modulus = p; continue; }
+            ulong inv = field.Inverse((ulong)(modulus % p));
+            ulong diff = field.Subtract(d, (ulong)(residue % p));
+            residue += modulus * field.Multiply(diff, inv);
+            modulus *= p;
+        }
+        return ChineseRemainder.Symmetric(residue, modulus);
+    }
+}

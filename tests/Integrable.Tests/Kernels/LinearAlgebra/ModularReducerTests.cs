@@ -1,0 +1,102 @@
+using System.Numerics;
+using Integrable.Kernels.LinearAlgebra;
+using Integrable.Numbers;
+
+namespace Integrable.Tests.Kernels.LinearAlgebra;
+
+public class ModularReducerTests
+{
+    public static TheoryData<ulong> Moduli => new() { 2, 3, 101, 4294967291UL, 4294967311UL, 2305843009213693951UL, Primes.Large(0), Primes.Large(3) };
+
+    [Theory]
+    [MemberData(nameof(Moduli))]
+    public void Dot_RandomLengths_MatchesBigInteger(ulong p)
+    {
+        var r = new ModularReducer(new PrimeField(p));
+        var rng = new Random((int)(p % 10007));
+        foreach (int n in new[] { 0, 1, 2, 3, 15, 16, 17, 31, 32, 33, 100, 257 })
+        {
+            var a = new ulong[n];
+            var b = new ulong[n];
+            for (int i = 0; i < n; i++)
+            {
+                // Include the extreme residue p − 1 often: the accumulator bounds are tightest there.
+                a[i] = rng.Next(3) == 0 ? p - 1 : (ulong)rng.NextInt64() % p;
+                b[i] = rng.Next(3) == 0 ? p - 1 : (ulong)rng.NextInt64() % p;
+            }
+            BigInteger expected = 0;
+            for (int i = 0; i < n; i++) expected += (BigInteger)a[i] * b[i];
+            Assert.Equal((ulong)(expected % p), r.Dot(a, b));
+        }
+    }
+
+    [Theory]
+    [MemberData(nameof(Moduli))]
+    public void Reductions_MatchBigInteger(ulong p)
+    {
+        var r = new ModularReducer(new PrimeField(p));
+        var rng = new Random(5);
+        for (int t = 0; t < 2000; t++)
+        {
+            ulong hi = t < 5 ? ulong.MaxValue - (ulong)t : (ulong)rng.NextInt64() * 3;
+            ulong lo = (ulong)rng.NextInt64() * 5;
+            Assert.Equal(lo % p, r.Reduce64(lo));
+            Assert.Equal(hi % p, r.Reduce64(hi));
+            Assert.Equal((ulong)((((BigInteger)hi << 64) + lo) % p), r.Reduce128(hi, lo));
+            long s = rng.NextInt64(long.MinValue, long.MaxValue);
+            Assert.Equal((ulong)((((BigInteger)s % p) + p) % p), r.FromSigned(s));
+        }
+        Assert.Equal((ulong)(((BigInteger)long.MinValue % p + p) % p), r.FromSigned(long.MinValue));
+    }
+
+    [Theory]
+    [MemberData(nameof(Moduli))]
+    public void FromWords_MatchesBigIntegerRemainder(ulong p)
+    {
+        var r = new ModularReducer(new PrimeField(p));
+        var rng = new Random(6);
+        foreach (int bits in new[] { 1, 63, 64, 65, 200, 1000, 5000 })
+        {
+            var bytes = new byte[bits / 8 + 1];
+            rng.NextBytes(bytes);
+            bytes[^1] &= 0x7F;
+            var v = new BigInteger(bytes);
+            foreach (var x in new[] { v, -v })
+            {
+                var words = new ulong[WordArithmetic.WordCount(x)];
+                WordArithmetic.WriteMagnitude(x, words);
+                Assert.Equal(x, WordArithmetic.ToBigInteger(words, x.Sign < 0));
+                var expected = ((x % p) + p) % p;
+                Assert.Equal((ulong)expected, r.FromWords(words, x.Sign < 0));
+            }
+        }
+    }
+
+    [Fact]
+    public void AddMul_MatchesBigInteger()
+    {
+        var rng = new Random(7);
+        for (int t = 0; t < 200; t++)
+        {
+            var x = RandomBig(rng, rng.Next(1, 400));
+            var y = RandomBig(rng, rng.Next(1, 200));
+            var z = RandomBig(rng, rng.Next(1, 500));
+            var acc = new ulong[(int)((Math.Max(z.GetBitLength(), x.GetBitLength() + y.GetBitLength()) + 1) / 64) + 2];
+            WordArithmetic.WriteMagnitude(z, acc.AsSpan(0, WordArithmetic.WordCount(z)));
+            var xw = new ulong[WordArithmetic.WordCount(x)];
+            var yw = new ulong[WordArithmetic.WordCount(y)];
+            WordArithmetic.WriteMagnitude(x, xw);
+            WordArithmetic.WriteMagnitude(y, yw);
+            WordArithmetic.AddMul(acc, xw, yw);
+            Assert.Equal(z + x * y, WordArithmetic.ToBigInteger(acc, false));
+        }
+    }
+
+    private static BigInteger RandomBig(Random rng, int bits)
+    {
+        var bytes = new byte[bits / 8 + 2];
+        rng.NextBytes(bytes);
+        bytes[^1] = 0;
+        return new BigInteger(bytes);
+    }
+}

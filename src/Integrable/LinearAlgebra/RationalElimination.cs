@@ -181,8 +181,8 @@ internal static class RationalElimination
             var bits = new long[b.Cols];
             for (int j = 0; j < b.Cols; j++)
             {
-                var x = b.Entry(i, j);
-                bits[j] = x.IsZero ? -1 : (x.Sign < 0 ? (-x).GetBitLength() : x.GetBitLength());
+                long bt = b.EntryBits(i, j);
+                bits[j] = bt == 0 ? -1 : bt;
                 if (bits[j] > maxBits) maxBits = bits[j];
             }
             double sum = 0;

@@ -14,40 +14,38 @@ internal sealed class IntegerRows
     private readonly ulong[]? _words;     // magnitudes of the big entries, little-endian words
     private readonly int[]? _start;       // entry e occupies _words[_start[e] .. _start[e + 1])
     private readonly bool[]? _negative;
+    private BigInteger[]? _big;
 
-    private IntegerRows(int rows, int cols, long[]? small, BigInteger[]? big, BigInteger[] rowScales)
+    private IntegerRows(int rows, int cols, long[] small, BigInteger[] rowScales)
     {
         Rows = rows;
         Cols = cols;
         Small = small;
-        Big = big;
         RowScales = rowScales;
-        if (small is not null)
-        {
-            long maxAbs = 0;
-            foreach (var v in small) { long a = v < 0 ? -v : v; if (a > maxAbs) maxAbs = a; }
-            MaxBits = 64 - BitOperations.LeadingZeroCount((ulong)maxAbs);
-            TotalWords = small.Length;
-            return;
-        }
-        int n = big!.Length;
-        _start = new int[n + 1];
-        _negative = new bool[n];
-        long total = 0;
+        long maxAbs = 0;
+        foreach (var v in small) { long a = v < 0 ? -v : v; if (a > maxAbs) maxAbs = a; }
+        MaxBits = 64 - BitOperations.LeadingZeroCount((ulong)maxAbs);
+        TotalWords = small.Length;
+    }
+
+    private IntegerRows(int rows, int cols, ulong[] words, int[] start, bool[] negative, BigInteger[] rowScales)
+    {
+        Rows = rows;
+        Cols = cols;
+        _words = words;
+        _start = start;
+        _negative = negative;
+        RowScales = rowScales;
         long maxBits = 0;
-        for (int e = 0; e < n; e++)
+        for (int e = 0; e < negative.Length; e++)
         {
-            _start[e] = checked((int)total);
-            total += WordArithmetic.WordCount(big[e]);
-            _negative[e] = big[e].Sign < 0;
-            long bits = big[e].Sign < 0 ? (-big[e]).GetBitLength() : big[e].GetBitLength();
+            int len = start[e + 1] - start[e];
+            if (len == 0) continue;
+            long bits = 64L * (len - 1) + 64 - BitOperations.LeadingZeroCount(words[start[e + 1] - 1]);
             if (bits > maxBits) maxBits = bits;
         }
-        _start[n] = checked((int)total);
-        _words = new ulong[total];
-        for (int e = 0; e < n; e++) WordArithmetic.WriteMagnitude(big[e], _words.AsSpan(_start[e], _start[e + 1] - _start[e]));
         MaxBits = maxBits;
-        TotalWords = total;
+        TotalWords = words.Length;
     }
 
     public int Rows { get; }
@@ -56,8 +54,18 @@ internal sealed class IntegerRows
     /// <summary>Row-major entries when every one fits in a word; null otherwise.</summary>
     public long[]? Small { get; }
 
-    /// <summary>Row-major entries as big integers when some entry does not fit in a word; null otherwise.</summary>
-    public BigInteger[]? Big { get; }
+    /// <summary>Bit length of entry (i, j) (0 for zero).</summary>
+    public long EntryBits(int i, int j)
+    {
+        int e = i * Cols + j;
+        if (Small is not null)
+        {
+            long v = Small[e];
+            return 64 - BitOperations.LeadingZeroCount(IntegerMath.UnsignedAbs(v));
+        }
+        int len = _start![e + 1] - _start[e];
+        return len == 0 ? 0 : 64L * (len - 1) + 64 - BitOperations.LeadingZeroCount(_words![_start[e + 1] - 1]);
+    }
 
     /// <summary>The factors L_i by which the rows of the rational matrix were multiplied.</summary>
     public BigInteger[] RowScales { get; }
@@ -69,14 +77,25 @@ internal sealed class IntegerRows
     public long TotalWords { get; }
 
     /// <summary>Entry (i, j) as a big integer.</summary>
-    public BigInteger Entry(int i, int j) => Small is not null ? Small[i * Cols + j] : Big![i * Cols + j];
+    public BigInteger Entry(int i, int j) => Small is not null ? Small[i * Cols + j] : BigEntries()[i * Cols + j];
+
+    private BigInteger[] BigEntries()
+    {
+        var big = Volatile.Read(ref _big);
+        if (big is not null) return big;
+        big = new BigInteger[Rows * Cols];
+        for (int e = 0; e < big.Length; e++)
+            big[e] = WordArithmetic.ToBigInteger(_words.AsSpan(_start![e], _start[e + 1] - _start[e]), _negative![e]);
+        Volatile.Write(ref _big, big);
+        return big;
+    }
 
     /// <summary>All entries as big integers (a fresh row-major array).</summary>
     public BigInteger[] ToBigIntegers()
     {
         var r = new BigInteger[Rows * Cols];
         if (Small is not null) for (int e = 0; e < r.Length; e++) r[e] = Small[e];
-        else Big!.CopyTo(r, 0);
+        else BigEntries().CopyTo(r, 0);
         return r;
     }
 
@@ -84,55 +103,85 @@ internal sealed class IntegerRows
     public static IntegerRows FromRational(ReadOnlySpan<Rational> a, int rows, int cols)
     {
         var small = TryClearSmall(a, rows, cols, out var smallScales);
-        if (small is not null) return new IntegerRows(rows, cols, small, null, smallScales!);
-        var big = new BigInteger[rows * cols];
+        if (small is not null) return new IntegerRows(rows, cols, small, smallScales!);
+        return ClearBig(a, rows, cols);
+    }
+
+    /// <summary>Row clearing with big entries, on word arrays: the lcm of each row's denominators is
+    /// built largest first; a denominator that already divides it is detected by exact (2-adic)
+    /// division, which also yields the quotient, and only the others need a gcd. Quotients computed
+    /// before the lcm grew are scaled by the cofactors added later.</summary>
+    private static IntegerRows ClearBig(ReadOnlySpan<Rational> a, int rows, int cols)
+    {
+        var pool = new List<ulong[]>(rows * cols);
+        var negative = new bool[rows * cols];
         var scales = new BigInteger[rows];
         var order = new int[cols];
         var bits = new long[cols];
+        var quotient = new ulong[]?[cols];
+        var step = new int[cols];
+        ulong[] one = [1];
         for (int i = 0; i < rows; i++)
         {
             var row = a.Slice(i * cols, cols);
-            // The lcm of the denominators, largest first: later ones then mostly divide it already,
-            // which a remainder test (cheap when the sizes are close) detects without a gcd.
             for (int j = 0; j < cols; j++) { order[j] = j; bits[j] = row[j].IsInteger ? 0 : row[j].Denominator.GetBitLength(); }
             Array.Sort(bits, order);
-            BigInteger l = BigInteger.One;
-            for (int t = cols - 1; t >= 0; t--)
+            ulong[]? l = null;
+            var cofactors = new List<ulong[]>();
+            Array.Clear(quotient);
+            for (int t = cols - 1; t >= 0 && bits[t] > 0; t--)
             {
-                if (bits[t] == 0) break;
-                var d = row[order[t]].Denominator;
-                if (l.IsOne) { l = d; continue; }
-                if (BigInteger.Remainder(l, d).IsZero) continue;
-                var g = BigInteger.GreatestCommonDivisor(l, d);
-                l = l / g * d;
+                int j = order[t];
+                var d = Words(row[j].Denominator);
+                if (l is null) { l = d; quotient[j] = one; step[j] = 0; continue; }
+                var q = WordArithmetic.TryDivideExact(l, d);
+                if (q is not null) { quotient[j] = q; step[j] = cofactors.Count; continue; }
+                var lb = WordArithmetic.ToBigInteger(l, false);
+                var db = row[j].Denominator;
+                var g = BigInteger.GreatestCommonDivisor(lb, db);
+                var c = Words(db / g);
+                quotient[j] = Words(lb / g);
+                cofactors.Add(c);
+                step[j] = cofactors.Count;
+                l = WordArithmetic.Multiply(l, c);
             }
-            scales[i] = l;
+            // suffix[s] = product of the cofactors added at steps s, s+1, …
+            var suffix = new ulong[cofactors.Count + 1][];
+            suffix[cofactors.Count] = one;
+            for (int s2 = cofactors.Count - 1; s2 >= 0; s2--) suffix[s2] = WordArithmetic.Multiply(cofactors[s2], suffix[s2 + 1]);
+            var lFinal = l ?? one;
+            scales[i] = WordArithmetic.ToBigInteger(lFinal, false);
             for (int j = 0; j < cols; j++)
             {
                 var x = row[j];
-                if (x.IsZero) continue;
-                if (x.IsInteger) { big[i * cols + j] = l.IsOne ? x.Numerator : x.Numerator * l; continue; }
-                var d = x.Denominator;
-                big[i * cols + j] = d == l ? x.Numerator : x.Numerator * (l / d);
+                negative[i * cols + j] = x.Sign < 0;
+                if (x.IsZero) { pool.Add([]); continue; }
+                ulong[] q;
+                if (x.IsInteger) q = lFinal;
+                else
+                {
+                    q = quotient[j]!;
+                    var scale = suffix[step[j]];
+                    if (!(scale.Length == 1 && scale[0] == 1)) q = WordArithmetic.Multiply(q, scale);
+                }
+                var n = Words(x.Numerator);
+                pool.Add(q.Length == 1 && q[0] == 1 ? n : WordArithmetic.Multiply(n, q));
             }
         }
-        return new IntegerRows(rows, cols, null, big, scales);
+        var start = new int[rows * cols + 1];
+        long total = 0;
+        for (int e = 0; e < pool.Count; e++) { start[e] = checked((int)total); total += pool[e].Length; }
+        start[pool.Count] = checked((int)total);
+        var words = new ulong[total];
+        for (int e = 0; e < pool.Count; e++) pool[e].CopyTo(words, start[e]);
+        return new IntegerRows(rows, cols, words, start, negative, scales);
     }
 
-    /// <summary>An integer matrix given directly (no scaling).</summary>
-    public static IntegerRows FromIntegers(BigInteger[] entries, int rows, int cols)
+    private static ulong[] Words(BigInteger v)
     {
-        var scales = new BigInteger[rows];
-        Array.Fill(scales, BigInteger.One);
-        bool allSmall = true;
-        foreach (var v in entries) if (v < long.MinValue + 1 || v > long.MaxValue) { allSmall = false; break; }
-        if (allSmall)
-        {
-            var s = new long[entries.Length];
-            for (int e = 0; e < s.Length; e++) s[e] = (long)entries[e];
-            return new IntegerRows(rows, cols, s, null, scales);
-        }
-        return new IntegerRows(rows, cols, null, (BigInteger[])entries.Clone(), scales);
+        var w = new ulong[WordArithmetic.WordCount(v)];
+        WordArithmetic.WriteMagnitude(v, w);
+        return w;
     }
 
     private static long[]? TryClearSmall(ReadOnlySpan<Rational> a, int rows, int cols, out BigInteger[]? scales)

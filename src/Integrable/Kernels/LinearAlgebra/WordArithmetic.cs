@@ -79,4 +79,91 @@ internal static class WordArithmetic
             carry = a < carry ? 1UL : 0UL;
         }
     }
+
+    /// <summary>Length of <paramref name="x"/> without leading (most significant) zero words.</summary>
+    public static int Normalized(ReadOnlySpan<ulong> x)
+    {
+        int n = x.Length;
+        while (n > 0 && x[n - 1] == 0) n--;
+        return n;
+    }
+
+    /// <summary>The product x·y as a new normalized word array.</summary>
+    public static ulong[] Multiply(ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y)
+    {
+        if (x.Length == 0 || y.Length == 0) return [];
+        var r = new ulong[x.Length + y.Length];
+        if (x.Length >= y.Length) AddMul(r, x, y); else AddMul(r, y, x);
+        int n = Normalized(r);
+        return n == r.Length ? r : r[..n];
+    }
+
+    /// <summary>The exact quotient a/d when d divides a (both normalized magnitudes, d non-zero);
+    /// null otherwise. Uses 2-adic (Jebelean) exact division on the odd part of d: each quotient word is
+    /// the low word of the running remainder times d⁻¹ mod 2^64, so no long division is needed, and
+    /// divisibility is decided by the remainder vanishing.</summary>
+    public static ulong[]? TryDivideExact(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> d)
+    {
+        if (d.Length == 0) throw new DivideByZeroException("exact division by zero");
+        if (a.Length == 0) return [];
+        int tzd = TrailingZeroBits(d), tza = TrailingZeroBits(a);
+        if (tza < tzd) return null;
+        var dd = ShiftRight(d, tzd);
+        var r = ShiftRight(a, tzd);
+        int n = Normalized(r), m = Normalized(dd);
+        if (n < m) return null;
+        ulong d0 = dd[0];
+        ulong inv = d0;                              // Newton iteration for d0⁻¹ mod 2^64 (d0 odd)
+        for (int t = 0; t < 6; t++) inv *= 2 - d0 * inv;
+        int qlen = n - m + 1;
+        var q = new ulong[qlen];
+        for (int k = 0; k < qlen; k++)
+        {
+            ulong qk = r[k] * inv;
+            q[k] = qk;
+            if (qk == 0) continue;
+            // r[k..n) -= qk·dd (mpn_submul_1); the remainder of an exact division never goes negative.
+            ulong cy = 0;
+            for (int t = 0; t < m; t++)
+            {
+                ulong hi = Math.BigMul(qk, dd[t], out ulong lo);
+                lo += cy;
+                hi += lo < cy ? 1UL : 0UL;               // qk·d + cy < 2^128 − 2^64: hi + 1 fits
+                ulong x = r[k + t];
+                r[k + t] = x - lo;
+                cy = hi + (x < lo ? 1UL : 0UL);
+            }
+            for (int u = k + m; cy != 0; u++)
+            {
+                if (u >= n) return null;                 // went negative: not divisible
+                ulong x = r[u];
+                r[u] = x - cy;
+                cy = x < cy ? 1UL : 0UL;
+            }
+        }
+        for (int u = qlen; u < n; u++) if (r[u] != 0) return null;
+        int ql = Normalized(q);
+        return ql == qlen ? q : q[..ql];
+    }
+
+    private static int TrailingZeroBits(ReadOnlySpan<ulong> x)
+    {
+        int i = 0;
+        while (x[i] == 0) i++;
+        return 64 * i + BitOperations.TrailingZeroCount(x[i]);
+    }
+
+    private static ulong[] ShiftRight(ReadOnlySpan<ulong> x, int bits)
+    {
+        int words = bits / 64, s = bits % 64;
+        int n = x.Length - words;
+        var r = new ulong[Math.Max(n, 0)];
+        for (int i = 0; i < n; i++)
+        {
+            ulong lo = x[i + words] >> s;
+            if (s != 0 && i + words + 1 < x.Length) lo |= x[i + words + 1] << (64 - s);
+            r[i] = lo;
+        }
+        return r;
+    }
 }

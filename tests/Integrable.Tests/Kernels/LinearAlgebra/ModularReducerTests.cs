@@ -71,32 +71,4 @@ public class ModularReducerTests
             }
         }
     }
-
-    [Fact]
-    public void AddMul_MatchesBigInteger()
-    {
-        var rng = new Random(7);
-        for (int t = 0; t < 200; t++)
-        {
-            var x = RandomBig(rng, rng.Next(1, 400));
-            var y = RandomBig(rng, rng.Next(1, 200));
-            var z = RandomBig(rng, rng.Next(1, 500));
-            var acc = new ulong[(int)((Math.Max(z.GetBitLength(), x.GetBitLength() + y.GetBitLength()) + 1) / 64) + 2];
-            WordArithmetic.WriteMagnitude(z, acc.AsSpan(0, WordArithmetic.WordCount(z)));
-            var xw = new ulong[WordArithmetic.WordCount(x)];
-            var yw = new ulong[WordArithmetic.WordCount(y)];
-            WordArithmetic.WriteMagnitude(x, xw);
-            WordArithmetic.WriteMagnitude(y, yw);
-            WordArithmetic.AddMul(acc, xw, yw);
-            Assert.Equal(z + x * y, WordArithmetic.ToBigInteger(acc, false));
-        }
-    }
-
-    private static BigInteger RandomBig(Random rng, int bits)
-    {
-        var bytes = new byte[bits / 8 + 2];
-        rng.NextBytes(bytes);
-        bytes[^1] = 0;
-        return new BigInteger(bytes);
-    }
 }

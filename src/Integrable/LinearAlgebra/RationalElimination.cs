@@ -92,13 +92,12 @@ internal static class RationalElimination
         BigInteger modulus = BigInteger.One;
         Rational[]? previous = null;
         bool mayVerifyEarly = true;
+        int sentinel = -1;
         var sw = new Stopwatch();
         for (int index = 0, used = 0; used < limit; index++)
         {
             ulong p = options.PrimeSequence(index);
-            PrimeField field;
-            try { field = new PrimeField(p); }
-            catch (ArgumentException) { throw new InvalidOperationException($"prime supply returned {p}, which is not a prime below 2^62"); }
+            var field = Field(p);
             used++;
             if (diag is not null) diag.PrimesUsed++;
             sw.Restart();
@@ -119,6 +118,7 @@ internal static class RationalElimination
                 residues = null;
                 modulus = BigInteger.One;
                 previous = null;
+                sentinel = -1;
             }
             var e = ech.ReducedFreeEntries(free!);
             if (diag is not null) diag.ModularTime += sw.Elapsed;
@@ -130,7 +130,7 @@ internal static class RationalElimination
             }
             sw.Restart();
             Accumulate(ref residues, ref modulus, e, p);
-            bool ok = TryReconstruct(residues!, modulus, r, nf, out var candidate);
+            bool ok = TryReconstruct(residues!, modulus, r, nf, ref sentinel, out var candidate);
             if (diag is not null) diag.ReconstructionTime += sw.Elapsed;
             if (!ok)
             {
@@ -195,6 +195,18 @@ internal static class RationalElimination
         return total;
     }
 
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<ulong, PrimeField> Fields = new();
+
+    /// <summary>The field of a supplied prime; constructing one runs a primality test, so they are cached.</summary>
+    private static PrimeField Field(ulong p)
+    {
+        if (Fields.TryGetValue(p, out var f)) return f;
+        try { f = new PrimeField(p); }
+        catch (ArgumentException) { throw new InvalidOperationException($"prime supply returned {p}, which is not a prime below 2^62"); }
+        if (Fields.Count < 4096) Fields.TryAdd(p, f);
+        return f;
+    }
+
     private static void Accumulate(ref BigInteger[]? residues, ref BigInteger modulus, ulong[] image, ulong p)
     {
         if (residues is null)
@@ -205,7 +217,7 @@ internal static class RationalElimination
             return;
         }
         // Garner step: x = r + M·((s − r)·M⁻¹ mod p).
-        var field = new PrimeField(p);
+        var field = Field(p);
         ulong inv = field.Inverse((ulong)(modulus % p));
         for (int t = 0; t < image.Length; t++)
         {
@@ -217,31 +229,69 @@ internal static class RationalElimination
     }
 
     /// <summary>Rational reconstruction of every entry (row-major r × nf), column by column with a
-    /// running common denominator, within the symmetric bounds N = D = ⌊√(M/2)⌋.</summary>
-    private static bool TryReconstruct(BigInteger[] residues, BigInteger modulus, int r, int nf, out Rational[] values)
+    /// running common denominator, within the symmetric bounds N = D = ⌊√(M/2)⌋. The entry that failed
+    /// last time (<paramref name="sentinel"/>) is tried first, so a premature attempt costs one
+    /// reconstruction; on failure it is updated to the entry that failed.</summary>
+    private static bool TryReconstruct(BigInteger[] residues, BigInteger modulus, int r, int nf, ref int sentinel, out Rational[] values)
     {
-        values = new Rational[r * nf];
+        values = [];
         var bound = RationalReconstruction.Sqrt(modulus / 2);
+        if (sentinel >= 0 && !residues[sentinel].IsZero && !TryReconstructOne(residues[sentinel], modulus, bound, bound, out _))
+            return false;
+        var result = new Rational[r * nf];
         var half = modulus >> 1;
         for (int q = 0; q < nf; q++)
         {
             BigInteger den = BigInteger.One;
             for (int k = 0; k < r; k++)
             {
-                var a = residues[k * nf + q];
+                int index = k * nf + q;
+                var a = residues[index];
                 if (a.IsZero) continue;
                 var y = den.IsOne ? a : a * den % modulus;
                 var s = y > half ? y - modulus : y;
                 if (BigInteger.Abs(s) <= bound)
                 {
-                    values[k * nf + q] = new Rational(s, den);
+                    result[index] = den.IsOne ? new Rational(s) : new Rational(s, den);
                     continue;
                 }
-                if (!RationalReconstruction.TryReconstruct(y, modulus, bound, bound / den, out var frac)) return false;
+                if (!TryReconstructOne(y, modulus, bound, bound / den, out var frac))
+                {
+                    sentinel = index;
+                    return false;
+                }
                 den *= frac.Denominator;
-                values[k * nf + q] = new Rational(frac.Numerator, den);
+                result[index] = new Rational(frac.Numerator, den);
             }
         }
+        values = result;
+        return true;
+    }
+
+    /// <summary>One rational reconstruction; 128-bit arithmetic while the modulus fits (one or two
+    /// primes), big integers beyond.</summary>
+    private static bool TryReconstructOne(BigInteger a, BigInteger modulus, BigInteger numeratorBound, BigInteger denominatorBound, out Rational value)
+    {
+        if (modulus.GetBitLength() > 126 || denominatorBound.IsZero)
+            return RationalReconstruction.TryReconstruct(a, modulus, numeratorBound, denominatorBound, out value);
+        value = default;
+        UInt128 m = (UInt128)modulus, n = (UInt128)numeratorBound, dBound = (UInt128)denominatorBound;
+        UInt128 r0 = m, r1 = (UInt128)a % m;
+        Int128 t0 = 0, t1 = 1;
+        while (r1 > n)
+        {
+            UInt128 q = r0 / r1;
+            (r0, r1) = (r1, r0 - q * r1);
+            (t0, t1) = (t1, t0 - (Int128)q * t1);
+        }
+        UInt128 absT = (UInt128)(t1 < 0 ? -t1 : t1);
+        if (absT == 0 || absT > dBound) return false;
+        // gcd(t, m) must be 1.
+        UInt128 x = m, y = absT;
+        while (y != 0) (x, y) = (y, x % y);
+        if (x != 1) return false;
+        var num = (BigInteger)r1;
+        value = new Rational(t1 < 0 ? -num : num, (BigInteger)absT);
         return true;
     }
 
@@ -330,7 +380,7 @@ internal static class RationalElimination
         for (int index = 0; modulus < target; index++)
         {
             ulong p = options.PrimeSequence(index);
-            var field = new PrimeField(p);
+            var field = Field(p);
             var reducer = new ModularReducer(field);
             b.ReduceColumnMajor(reducer, image);
             var ech = ModularEchelon.Compute(image, n, n, reducer);

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 using Integrable.Numbers;
 
@@ -100,6 +101,7 @@ internal sealed class IntegerRows
     }
 
     /// <summary>Clears the denominators of a rational matrix row by row.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static IntegerRows FromRational(ReadOnlySpan<Rational> a, int rows, int cols)
     {
         var small = TryClearSmall(a, rows, cols, out var smallScales);
@@ -111,6 +113,7 @@ internal sealed class IntegerRows
     /// built largest first; a denominator that already divides it is detected by exact (2-adic)
     /// division, which also yields the quotient, and only the others need a gcd. Quotients computed
     /// before the lcm grew are scaled by the cofactors added later.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static IntegerRows ClearBig(ReadOnlySpan<Rational> a, int rows, int cols)
     {
         var pool = new List<ulong[]>(rows * cols);
@@ -184,6 +187,7 @@ internal sealed class IntegerRows
         return w;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static long[]? TryClearSmall(ReadOnlySpan<Rational> a, int rows, int cols, out BigInteger[]? scales)
     {
         scales = null;
@@ -218,6 +222,7 @@ internal sealed class IntegerRows
     }
 
     /// <summary>Writes B mod p in column-major order: entry (i, j) at j·Rows + i.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void ReduceColumnMajor(ModularReducer reducer, Span<ulong> destination)
     {
         int rows = Rows, cols = Cols;
@@ -243,6 +248,7 @@ internal sealed class IntegerRows
     /// <summary>Exact test that B·w = 0 for an integer vector w given by its support and values.</summary>
     /// <param name="support">Column indices of the non-zero entries of w.</param>
     /// <param name="values">The entries of w on <paramref name="support"/>.</param>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public bool Annihilates(ReadOnlySpan<int> support, ReadOnlySpan<BigInteger> values)
     {
         int n = support.Length;
@@ -273,6 +279,7 @@ internal sealed class IntegerRows
         return AnnihilatesWords(support, values, maxValueBits, logN);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private bool AnnihilatesWords(ReadOnlySpan<int> support, ReadOnlySpan<BigInteger> values, long maxValueBits, int logN)
     {
         int n = support.Length;

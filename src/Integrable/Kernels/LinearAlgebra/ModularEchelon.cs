@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Integrable.Numbers;
 
 namespace Integrable.Kernels.LinearAlgebra;
@@ -51,6 +52,7 @@ internal sealed class ModularEchelon
     /// <param name="rows">Row count.</param>
     /// <param name="cols">Column count.</param>
     /// <param name="reducer">Arithmetic modulo p.</param>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ModularEchelon Compute(ReadOnlySpan<ulong> columnMajor, int rows, int cols, ModularReducer reducer)
     {
         int stride = Math.Max(1, Math.Min(rows, cols));
@@ -127,6 +129,7 @@ internal sealed class ModularEchelon
     /// <summary>The reduced row echelon entries on the free columns: E[k, q] (row-major, Rank × free
     /// count) is the entry of the RREF in row k and free column <c>FreeColumns()[q]</c>; the RREF is the
     /// identity on the pivot columns.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public ulong[] ReducedFreeEntries(int[] freeColumns)
     {
         int r = Rank, nf = freeColumns.Length;

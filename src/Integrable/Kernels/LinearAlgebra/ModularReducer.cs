@@ -80,6 +80,7 @@ internal readonly struct ModularReducer
     }
 
     /// <summary>The residue of a magnitude given by little-endian 64-bit words, negated when <paramref name="negative"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public ulong FromWords(ReadOnlySpan<ulong> words, bool negative)
     {
         ulong r = 0;
@@ -106,6 +107,7 @@ internal readonly struct ModularReducer
     }
 
     /// <summary>Σ a[i]·b[i] mod p over residues (delayed reduction: one fold per sixteen products).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public ulong Dot(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         int n = a.Length;

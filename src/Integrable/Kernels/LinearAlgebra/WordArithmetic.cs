@@ -40,6 +40,7 @@ internal static class WordArithmetic
 
     /// <summary>acc += x·y (schoolbook). <paramref name="acc"/> must have room for the result; the
     /// carry out of its top word is lost, so callers size it generously.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void AddMul(Span<ulong> acc, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y)
     {
         for (int s = 0; s < y.Length; s++)
@@ -102,6 +103,7 @@ internal static class WordArithmetic
     /// null otherwise. Uses 2-adic (Jebelean) exact division on the odd part of d: each quotient word is
     /// the low word of the running remainder times d⁻¹ mod 2^64, so no long division is needed, and
     /// divisibility is decided by the remainder vanishing.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[]? TryDivideExact(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> d)
     {
         if (d.Length == 0) throw new DivideByZeroException("exact division by zero");

@@ -1,6 +1,10 @@
 namespace Integrable.LinearAlgebra;
 
 /// <summary>What the solution set of a linear system A·x = b looks like.</summary>
+/// <example><code>
+/// var s = RationalMatrix.FromRows([[1, 1]]).Solve([2]);
+/// // s.Status == LinearSystemStatus.Underdetermined: x = (2, 0) + t·(−1, 1)
+/// </code></example>
 public enum LinearSystemStatus
 {
     /// <summary>Exactly one solution (A has full column rank and b lies in its column space).</summary>

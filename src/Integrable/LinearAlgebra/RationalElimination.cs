@@ -84,7 +84,9 @@ internal static class RationalElimination
     {
         int m = b.Rows, c = b.Cols;
         var diag = options.Diagnostics;
-        int limit = options.PrimeLimit ?? GuaranteedPrimeCount(b) + 8;
+        // The Hadamard-based budget costs a pass over all entries, so it is only worked out once the
+        // first few primes have not finished the job (most calls end after one or two).
+        int limit = options.PrimeLimit ?? int.MaxValue;
         var image = new ulong[m * c];
         int[]? bestPivots = null;
         int[]? free = null;
@@ -96,6 +98,8 @@ internal static class RationalElimination
         var sw = new Stopwatch();
         for (int index = 0, used = 0; used < limit; index++)
         {
+            if (used == 4 && options.PrimeLimit is null) limit = GuaranteedPrimeCount(b) + 8;
+            if (used >= limit) break;
             ulong p = options.PrimeSequence(index);
             var field = Field(p);
             used++;
@@ -239,6 +243,7 @@ internal static class RationalElimination
         if (sentinel >= 0 && !residues[sentinel].IsZero && !TryReconstructOne(residues[sentinel], modulus, bound, bound, out _))
             return false;
         var result = new Rational[r * nf];
+        if (modulus.GetBitLength() <= 63) return TryReconstructWord(residues, (ulong)modulus, r, nf, ref sentinel, result, out values);
         var half = modulus >> 1;
         for (int q = 0; q < nf; q++)
         {
@@ -261,6 +266,40 @@ internal static class RationalElimination
                     return false;
                 }
                 den *= frac.Denominator;
+                result[index] = new Rational(frac.Numerator, den);
+            }
+        }
+        values = result;
+        return true;
+    }
+
+    /// <summary>The same for a modulus below 2^63 (one prime), in word arithmetic.</summary>
+    private static bool TryReconstructWord(BigInteger[] residues, ulong m, int r, int nf, ref int sentinel, Rational[] result, out Rational[] values)
+    {
+        values = [];
+        ulong bound = (ulong)RationalReconstruction.Sqrt(m / 2);
+        ulong half = m >> 1;
+        for (int q = 0; q < nf; q++)
+        {
+            ulong den = 1;
+            for (int k = 0; k < r; k++)
+            {
+                int index = k * nf + q;
+                ulong a = (ulong)residues[index];
+                if (a == 0) continue;
+                ulong y = den == 1 ? a : (ulong)((UInt128)a * den % m);
+                long sv = y > half ? -(long)(m - y) : (long)y;
+                if ((ulong)Math.Abs(sv) <= bound)
+                {
+                    result[index] = new Rational(sv, (long)den);
+                    continue;
+                }
+                if (!TryReconstructOne(y, m, bound, bound / den, out var frac))
+                {
+                    sentinel = index;
+                    return false;
+                }
+                den *= (ulong)frac.Denominator;
                 result[index] = new Rational(frac.Numerator, den);
             }
         }

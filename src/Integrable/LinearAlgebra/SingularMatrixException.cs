@@ -2,6 +2,10 @@ namespace Integrable.LinearAlgebra;
 
 /// <summary>Thrown when an operation needs an invertible matrix (an inverse, for instance) and the
 /// matrix is singular; <see cref="Rank"/> says how far from invertible it is.</summary>
+/// <example><code>
+/// try { RationalMatrix.FromRows([[1, 2], [2, 4]]).Inverse(); }
+/// catch (SingularMatrixException e) { Console.WriteLine(e.Rank); }   // 1
+/// </code></example>
 public sealed class SingularMatrixException : ArithmeticException
 {
     /// <summary>Creates the exception.</summary>

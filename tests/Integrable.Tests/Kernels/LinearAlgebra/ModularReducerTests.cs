@@ -71,4 +71,19 @@ public class ModularReducerTests
             }
         }
     }
+
+    [Theory]
+    [MemberData(nameof(Moduli))]
+    public void Dot_AllMaximalResidues_LongVectors(ulong p)
+    {
+        // Every product is (p − 1)², the worst case for the accumulators of both kernels.
+        var r = new ModularReducer(new PrimeField(p));
+        foreach (int n in new[] { 31, 32, 33, 63, 64, 65, 1000, 4099 })
+        {
+            var a = Enumerable.Repeat(p - 1, n).ToArray();
+            var expected = (ulong)((BigInteger)(p - 1) * (p - 1) * n % p);
+            Assert.Equal(expected, r.Dot(a, a));
+            if (System.Runtime.Intrinsics.X86.Avx512F.IsSupported && n >= 32) Assert.Equal(expected, r.DotAvx512(a, a));
+        }
+    }
 }

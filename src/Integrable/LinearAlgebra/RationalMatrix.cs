@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using System.Numerics;
 using Integrable.Numbers;
 
 namespace Integrable.LinearAlgebra;
@@ -241,6 +242,30 @@ public sealed partial class RationalMatrix : IEquatable<RationalMatrix>
             right._data.AsSpan(i * b, b).CopyTo(d.AsSpan(i * n + a, b));
         }
         return new RationalMatrix(m, n, d);
+    }
+
+    /// <summary>Each non-zero row scaled by a positive rational to a primitive integer vector (integer
+    /// entries with greatest common divisor 1); zero rows stay zero. Handy for kernel vectors that are
+    /// coefficient vectors, e.g. of an invariant.</summary>
+    /// <returns>The rescaled matrix; it has the same row space as this one, row by row.</returns>
+    /// <example><c>RationalMatrix.FromRows([[new Rational(1, 2), new Rational(-3, 4)]]).WithPrimitiveIntegerRows()</c> is <c>[[2, -3]]</c>.</example>
+    public RationalMatrix WithPrimitiveIntegerRows()
+    {
+        int n = ColumnCount;
+        var d = (Rational[])_data.Clone();
+        for (int i = 0; i < RowCount; i++)
+        {
+            var row = d.AsSpan(i * n, n);
+            BigInteger l = BigInteger.One, g = BigInteger.Zero;
+            foreach (var x in row)
+                if (!x.IsZero && !x.IsInteger) l = l / BigInteger.GreatestCommonDivisor(l, x.Denominator) * x.Denominator;
+            foreach (var x in row)
+                if (!x.IsZero) g = BigInteger.GreatestCommonDivisor(g, x.Numerator * (l / x.Denominator));
+            if (g.IsZero) continue;
+            for (int j = 0; j < n; j++)
+                if (!row[j].IsZero) row[j] = new Rational(row[j].Numerator * (l / row[j].Denominator) / g);
+        }
+        return new RationalMatrix(RowCount, n, d);
     }
 
     /// <summary>The image of this matrix in Z/pZ.</summary>

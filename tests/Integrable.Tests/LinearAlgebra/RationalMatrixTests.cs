@@ -144,4 +144,13 @@ public partial class RationalMatrixTests
         var big = RationalMatrix.FromRows([[new Rational(BigInteger.Pow(10, 40) + 1, 3)]]);
         Assert.Equal(f.FromRational(big[0, 0]), big.ToModular(f)[0, 0]);
     }
+
+    [Fact]
+    public void WithPrimitiveIntegerRows_ScalesEachRow()
+    {
+        var a = RationalMatrix.FromRows([[new Rational(1, 2), new Rational(-3, 4), 0], [0, 0, 0], [-6, 9, 12], [new Rational(-2, 3), 0, 0]]);
+        Assert.Equal(RationalMatrix.FromRows([[2, -3, 0], [0, 0, 0], [-2, 3, 4], [-1, 0, 0]]), a.WithPrimitiveIntegerRows());
+        var k = RationalMatrix.FromRows([[1, 2, 3], [2, 4, 7], [1, 2, 4]]).Nullspace().WithPrimitiveIntegerRows();
+        Assert.Equal(RationalMatrix.FromRows([[-2, 1, 0]]), k);
+    }
 }

@@ -37,7 +37,7 @@ internal sealed class LinearAlgebraProfileWorkload : IWorkload
         var image = new ulong[rows * cols];
         double clear = Measure(() => IntegerRows.FromRational(data, rows, cols));
         double reduce = Measure(() => b.ReduceColumnMajor(reducer, image));
-        double echelon = Measure(() => ModularEchelon.Compute(image, rows, cols, reducer));
+        double echelon = Measure(() => ModularEchelon.Compute(image, rows, cols, reducer).Dispose());
         var diag = new EliminationDiagnostics();
         double full = Measure(() => RationalElimination.Echelon(data, rows, cols, new EliminationOptions { Diagnostics = diag = new EliminationDiagnostics() }));
         double fullCleared = Measure(() => RationalElimination.Echelon(cleared, rows, cols, EliminationOptions.Default));

@@ -20,7 +20,7 @@ public sealed partial class ModularMatrix
         var colMajor = new ulong[rows * cols];
         for (int i = 0; i < rows; i++)
             for (int j = 0; j < cols; j++) colMajor[j * rows + i] = rowMajor[i * cols + j];
-        var ech = ModularEchelon.Compute(colMajor, rows, cols, new ModularReducer(field));
+        using var ech = ModularEchelon.Compute(colMajor, rows, cols, new ModularReducer(field));
         var free = ech.FreeColumns();
         return new EchelonData<ulong>(rows, cols, ech.PivotColumns, free, ech.ReducedFreeEntries(free));
     }
@@ -105,7 +105,8 @@ public sealed partial class ModularMatrix
         int n = RowCount;
         if (n == 0) return Field.One;
         var colMajor = Transpose()._data;
-        return ModularEchelon.Compute(colMajor, n, n, new ModularReducer(Field)).Determinant();
+        using var ech = ModularEchelon.Compute(colMajor, n, n, new ModularReducer(Field));
+        return ech.Determinant();
     }
 
     /// <summary>The inverse.</summary>

@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Diagnostics;
 using System.Numerics;
 using Integrable.Kernels.LinearAlgebra;
@@ -48,7 +49,7 @@ internal static class RationalElimination
             return new EchelonData<Rational>(rows, cols, [], EchelonData<Rational>.Complement([], cols), []);
         var diag = options.Diagnostics;
         var sw = Stopwatch.StartNew();
-        var b = IntegerRows.FromRational(data, rows, cols);
+        using var b = IntegerRows.FromRational(data, rows, cols);
         if (diag is not null) diag.ClearingTime += sw.Elapsed;
         return Echelon(b, options);
     }
@@ -82,12 +83,18 @@ internal static class RationalElimination
     /// <summary>The multimodular method; null when the prime limit is exhausted.</summary>
     private static EchelonData<Rational>? EchelonMultimodular(IntegerRows b, EliminationOptions options)
     {
+        var rented = ArrayPool<ulong>.Shared.Rent(b.Rows * b.Cols);
+        try { return EchelonMultimodular(b, options, rented.AsSpan(0, b.Rows * b.Cols)); }
+        finally { ArrayPool<ulong>.Shared.Return(rented); }
+    }
+
+    private static EchelonData<Rational>? EchelonMultimodular(IntegerRows b, EliminationOptions options, Span<ulong> image)
+    {
         int m = b.Rows, c = b.Cols;
         var diag = options.Diagnostics;
         // The Hadamard-based budget costs a pass over all entries, so it is only worked out once the
         // first few primes have not finished the job (most calls end after one or two).
         int limit = options.PrimeLimit ?? int.MaxValue;
-        var image = new ulong[m * c];
         int[]? bestPivots = null;
         int[]? free = null;
         BigInteger[]? residues = null;
@@ -107,7 +114,7 @@ internal static class RationalElimination
             sw.Restart();
             var reducer = new ModularReducer(field);
             b.ReduceColumnMajor(reducer, image);
-            var ech = ModularEchelon.Compute(image, m, c, reducer);
+            using var ech = ModularEchelon.Compute(image, m, c, reducer);
             int cmp = bestPivots is null ? 1 : CompareProfiles(ech.PivotColumns, bestPivots);
             if (cmp < 0)
             {
@@ -392,7 +399,7 @@ internal static class RationalElimination
     public static Rational Determinant(ReadOnlySpan<Rational> data, int n, EliminationOptions options)
     {
         if (n == 0) return Rational.One;
-        var b = IntegerRows.FromRational(data, n, n);
+        using var b = IntegerRows.FromRational(data, n, n);
         BigInteger scale = BigInteger.One;
         foreach (var s in b.RowScales) scale *= s;
         var method = options.Method;
@@ -422,7 +429,7 @@ internal static class RationalElimination
             var field = Field(p);
             var reducer = new ModularReducer(field);
             b.ReduceColumnMajor(reducer, image);
-            var ech = ModularEchelon.Compute(image, n, n, reducer);
+            using var ech = ModularEchelon.Compute(image, n, n, reducer);
             if (diag is not null) diag.PrimesUsed++;
             ulong d = ech.Determinant();
             if (d == 0 && ++zeros == 2 && residue.IsZero)

@@ -78,8 +78,8 @@ public sealed partial class RationalMatrix
         int m = left.RowCount, n = left.ColumnCount, p = right.ColumnCount;
         var result = new Rational[m * p];
         if (m == 0 || p == 0 || n == 0) return new RationalMatrix(m, p, result);
-        var a = IntegerRows.FromRational(left._data, m, n);
-        var bt = IntegerRows.FromRational(right.Transpose()._data, p, n);
+        using var a = IntegerRows.FromRational(left._data, m, n);
+        using var bt = IntegerRows.FromRational(right.Transpose()._data, p, n);
         int logN = 64 - BitOperations.LeadingZeroCount((ulong)n);
         bool small = a.Small is not null && bt.Small is not null && a.MaxBits + bt.MaxBits + logN + 1 <= 126;
         for (int i = 0; i < m; i++)

@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Runtime.CompilerServices;
 using System.Numerics;
 using Integrable.Numbers;
@@ -10,7 +11,7 @@ namespace Integrable.Kernels.LinearAlgebra;
 /// <remarks>Entries are stored as words when every entry fits (<see cref="Small"/>), otherwise as big
 /// integers with a pool of magnitude words used for fast reduction modulo word-size primes and for the
 /// exact kernel checks.</remarks>
-internal sealed class IntegerRows
+internal sealed class IntegerRows : IDisposable
 {
     private readonly ulong[]? _words;     // magnitudes of the big entries, little-endian words
     private readonly int[]? _start;       // entry e occupies _words[_start[e] .. _start[e + 1])
@@ -24,7 +25,7 @@ internal sealed class IntegerRows
         Small = small;
         RowScales = rowScales;
         long maxAbs = 0;
-        foreach (var v in small) { long a = v < 0 ? -v : v; if (a > maxAbs) maxAbs = a; }
+        foreach (var v in small.AsSpan(0, rows * cols)) { long a = v < 0 ? -v : v; if (a > maxAbs) maxAbs = a; }
         MaxBits = 64 - BitOperations.LeadingZeroCount((ulong)maxAbs);
         TotalWords = small.Length;
     }
@@ -52,8 +53,16 @@ internal sealed class IntegerRows
     public int Rows { get; }
     public int Cols { get; }
 
-    /// <summary>Row-major entries when every one fits in a word; null otherwise.</summary>
-    public long[]? Small { get; }
+    /// <summary>Row-major entries when every one fits in a word (a pooled array, possibly longer than
+    /// Rows × Cols); null otherwise.</summary>
+    public long[]? Small { get; private set; }
+
+    /// <summary>Returns the pooled word array; the object must not be used afterwards.</summary>
+    public void Dispose()
+    {
+        if (Small is { Length: > 0 } s) ArrayPool<long>.Shared.Return(s);
+        Small = null;
+    }
 
     /// <summary>Bit length of entry (i, j) (0 for zero).</summary>
     public long EntryBits(int i, int j)
@@ -191,23 +200,23 @@ internal sealed class IntegerRows
     private static long[]? TryClearSmall(ReadOnlySpan<Rational> a, int rows, int cols, out BigInteger[]? scales)
     {
         scales = null;
-        var b = new long[rows * cols];
+        var b = ArrayPool<long>.Shared.Rent(rows * cols);
         var sc = new BigInteger[rows];
         for (int i = 0; i < rows; i++)
         {
             long l = 1;
             for (int j = 0; j < cols; j++)
             {
-                if (!a[i * cols + j].TryGetSmall(out _, out long d)) return null;
+                if (!a[i * cols + j].TryGetSmall(out _, out long d)) { ArrayPool<long>.Shared.Return(b); return null; }
                 if (d == 1) continue;
                 long g = (long)IntegerMath.Gcd(l, d);
-                if (!TryMultiply(l / g, d, out l)) return null;
+                if (!TryMultiply(l / g, d, out l)) { ArrayPool<long>.Shared.Return(b); return null; }
             }
             sc[i] = l;
             for (int j = 0; j < cols; j++)
             {
                 a[i * cols + j].TryGetSmall(out long n, out long d);
-                if (!TryMultiply(n, l / d, out long v) || v == long.MinValue) return null;
+                if (!TryMultiply(n, l / d, out long v) || v == long.MinValue) { ArrayPool<long>.Shared.Return(b); return null; }
                 b[i * cols + j] = v;
             }
         }

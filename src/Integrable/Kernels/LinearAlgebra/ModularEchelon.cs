@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Runtime.CompilerServices;
 using Integrable.Numbers;
 
@@ -16,11 +17,13 @@ namespace Integrable.Kernels.LinearAlgebra;
 /// step is one 64×64→128-bit product and an add-with-carry instead of a full modular multiplication.</para>
 /// <para>The pivot columns form the lexicographically first set of linearly independent columns mod p.
 /// The input is column-major: entry (i, j) at index j·rows + i.</para>
+/// <para>Work arrays come from the shared array pool (no large-object-heap garbage per prime);
+/// <see cref="Dispose"/> returns the ones the result keeps.</para>
 /// </remarks>
-internal sealed class ModularEchelon
+internal sealed class ModularEchelon : IDisposable
 {
-    private readonly ulong[] _ut;        // U transposed: column j at [j·_stride, j·_stride + rank at j]
-    private readonly int[] _rankAt;      // rank reached after processing column j
+    private ulong[] _ut;                 // U transposed: column j at [j·_stride, j·_stride + rank at j]
+    private int[] _rankAt;               // rank reached after processing column j
     private readonly int _stride;
 
     private ModularEchelon(ModularReducer reducer, int rows, int cols, int rank, int[] pivotColumns, int[] pivotRows, ulong[] ut, int[] rankAt, int stride)
@@ -56,15 +59,19 @@ internal sealed class ModularEchelon
     public static ModularEchelon Compute(ReadOnlySpan<ulong> columnMajor, int rows, int cols, ModularReducer reducer)
     {
         int stride = Math.Max(1, Math.Min(rows, cols));
-        var l = new ulong[(long)rows * stride > int.MaxValue ? throw new OutOfMemoryException("matrix too large") : rows * stride];
-        var ut = new ulong[cols * stride];
-        var rankAt = new int[cols];
+        if ((long)rows * stride > Array.MaxLength || (long)cols * stride > Array.MaxLength)
+            throw new OutOfMemoryException($"a {rows}×{cols} elimination needs more than {Array.MaxLength} words");
+        // Every entry of these arrays is written before it is read (see the loop), so rented arrays
+        // need no clearing.
+        var l = ArrayPool<ulong>.Shared.Rent(rows * stride);
+        var ut = ArrayPool<ulong>.Shared.Rent(cols * stride);
+        var rankAt = ArrayPool<int>.Shared.Rent(cols);
         var pivotCols = new int[Math.Min(rows, cols)];
         var pivotRows = new int[Math.Min(rows, cols)];
-        var active = new int[rows];          // rows that are not pivot rows yet, in increasing order
+        var active = ArrayPool<int>.Shared.Rent(rows);   // rows that are not pivot rows yet, in increasing order
         for (int i = 0; i < rows; i++) active[i] = i;
         int activeCount = rows;
-        var t = new ulong[rows];
+        var t = ArrayPool<ulong>.Shared.Rent(rows);
         int r = 0;
         for (int j = 0; j < cols; j++)
         {
@@ -110,7 +117,19 @@ internal sealed class ModularEchelon
             r++;
             rankAt[j] = r;
         }
+        ArrayPool<ulong>.Shared.Return(l);
+        ArrayPool<ulong>.Shared.Return(t);
+        ArrayPool<int>.Shared.Return(active);
         return new ModularEchelon(reducer, rows, cols, r, pivotCols[..r], pivotRows[..r], ut, rankAt, stride);
+    }
+
+    /// <summary>Returns the work arrays to the pool; the object must not be used afterwards.</summary>
+    public void Dispose()
+    {
+        if (_ut.Length > 0) ArrayPool<ulong>.Shared.Return(_ut);
+        if (_rankAt.Length > 0) ArrayPool<int>.Shared.Return(_rankAt);
+        _ut = [];
+        _rankAt = [];
     }
 
     /// <summary>The free (non-pivot) columns in increasing order.</summary>

@@ -15,7 +15,7 @@ internal sealed class LinearAlgebraCrossoverWorkload : IWorkload
         var sb = new System.Text.StringBuilder();
         var rng = new Random(1);
         foreach (long bound in new long[] { 100, 1L << 40 })
-            foreach (var (m, n) in new[] { (2, 2), (2, 5), (3, 3), (3, 4), (4, 4), (4, 5), (4, 8), (5, 5), (5, 6), (6, 6), (6, 7), (7, 8), (8, 8), (8, 9), (10, 11), (12, 13), (16, 17) })
+            foreach (var (m, n) in new[] { (2, 2), (2, 5), (3, 3), (3, 4), (4, 4), (4, 5), (4, 8), (5, 5), (5, 6), (6, 6), (6, 7), (7, 8), (8, 8), (8, 9), (10, 11), (12, 12), (12, 13), (16, 16), (16, 17), (24, 25), (32, 33) })
             {
                 var mats = Enumerable.Range(0, 20).Select(_ => Enumerable.Range(0, m * n).Select(_ => (Rational)rng.NextInt64(-bound, bound)).ToArray()).ToArray();
                 double Time(EliminationMethod method)

@@ -29,14 +29,20 @@ namespace Integrable.LinearAlgebra;
 /// </remarks>
 internal static class RationalElimination
 {
-    // Dispatcher. Fraction-free elimination costs about m·c·r big-integer operations on numbers that
-    // grow to r times the entry size; the multimodular method costs, per prime, one reduction of every
-    // entry plus m·c·r word operations, plus reconstruction and the exact check, and usually needs only
-    // one or two primes because reconstruction stops as soon as the result is reached (output-sensitive).
-    // Measured on this code (benchmarks/Integrable.Benchmarks/LinearAlgebraBenchmarks.cs): fraction-free
-    // wins only for tiny matrices, where the fixed costs of the modular machinery (field setup, arrays,
-    // reconstruction) dominate; it also handles a single row or column. Everything else goes multimodular.
-    internal const int FractionFreeMaxCells = 36;
+    // Dispatcher (measured with the LAsmall workload, benchmarks/Integrable.Benchmarks/
+    // LinearAlgebraCrossoverWorkload.cs, random n×n and n×(n+1) matrices, entries below 100 or 2^40).
+    // Fraction-free elimination costs about m·c·r big-integer operations on numbers that grow to r times
+    // the entry size, and needs no check. The multimodular method costs, per prime, a reduction of every
+    // entry plus m·c·r word operations, plus Chinese remaindering and reconstruction of the reduced
+    // entries and one exact check; it is output-sensitive: a full-rank square matrix (no free column)
+    // or a nullspace with small vectors needs one or two primes whatever the entry sizes, while a
+    // reduced form with full-size entries needs about 2·log₂(Hadamard bound)/61 primes.
+    // Measured: for up to about 10×10 cells fraction-free wins or ties in every case (its fixed cost
+    // is a few microseconds; the multimodular fixed cost — field, pooled arrays, reconstruction — is
+    // several times that); on 16×17 with full-size outputs the two are within 2×; from 24×25 on the
+    // multimodular method wins even with full-size outputs, and with small outputs (the nullspaces of
+    // the invariant search) it wins by orders of magnitude. A single row or column is trivial either way.
+    internal const int FractionFreeMaxCells = 100;
 
     // Determinants: fraction-free up to this order; above it the multimodular method with the Hadamard
     // bound (a proven bound, so no check is needed) is faster.
@@ -103,6 +109,12 @@ internal static class RationalElimination
         bool mayVerifyEarly = true;
         int sentinel = -1;
         var sw = new Stopwatch();
+        // Reconstruction attempts are rationed geometrically: after a failed attempt with a modulus of
+        // B bits the next one waits for 1.2·B bits (at least one more prime). Outputs that need up to
+        // five primes are still tried after every prime, and large outputs (many cheap primes on a
+        // small matrix) cost O(log) attempts and at most 20% extra primes. Deterministic, unlike a
+        // schedule based on measured times.
+        long nextAttemptBits = 0;
         for (int index = 0, used = 0; used < limit; index++)
         {
             if (used == 4 && options.PrimeLimit is null) limit = GuaranteedPrimeCount(b) + 8;
@@ -141,8 +153,16 @@ internal static class RationalElimination
             }
             sw.Restart();
             Accumulate(ref residues, ref modulus, e, p);
+            long bits = modulus.GetBitLength();
+            bool lastChance = used >= limit;
+            if (bits < nextAttemptBits && !lastChance)
+            {
+                if (diag is not null) diag.ReconstructionTime += sw.Elapsed;
+                continue;
+            }
             bool ok = TryReconstruct(residues!, modulus, r, nf, ref sentinel, out var candidate);
             if (diag is not null) diag.ReconstructionTime += sw.Elapsed;
+            nextAttemptBits = ok ? 0 : bits + Math.Max(1, bits / 5);
             if (!ok)
             {
                 if (diag is not null) diag.ReconstructionFailures++;
@@ -151,7 +171,7 @@ internal static class RationalElimination
             }
             bool stable = previous is not null && candidate.AsSpan().SequenceEqual(previous);
             previous = candidate;
-            if (!stable && !(mayVerifyEarly && VerificationIsCheap(b, candidate, r, nf))) continue;
+            if (!stable && !lastChance && !(mayVerifyEarly && VerificationIsCheap(b, candidate, r, nf))) continue;
             sw.Restart();
             bool verified = Verify(b, bestPivots, free, candidate);
             if (diag is not null) { diag.Verifications++; diag.VerificationTime += sw.Elapsed; }
@@ -252,9 +272,12 @@ internal static class RationalElimination
         var result = new Rational[r * nf];
         if (modulus.GetBitLength() <= 63) return TryReconstructWord(residues, (ulong)modulus, r, nf, ref sentinel, result, out values);
         var half = modulus >> 1;
+        // One running denominator for all entries: the entries of a reduced form share the
+        // denominator of a pivot minor, so after the first full reconstruction the others are usually a
+        // multiplication and a comparison.
+        BigInteger den = BigInteger.One;
         for (int q = 0; q < nf; q++)
         {
-            BigInteger den = BigInteger.One;
             for (int k = 0; k < r; k++)
             {
                 int index = k * nf + q;
@@ -286,9 +309,9 @@ internal static class RationalElimination
         values = [];
         ulong bound = (ulong)RationalReconstruction.Sqrt(m / 2);
         ulong half = m >> 1;
+        ulong den = 1;
         for (int q = 0; q < nf; q++)
         {
-            ulong den = 1;
             for (int k = 0; k < r; k++)
             {
                 int index = k * nf + q;
@@ -319,7 +342,7 @@ internal static class RationalElimination
     private static bool TryReconstructOne(BigInteger a, BigInteger modulus, BigInteger numeratorBound, BigInteger denominatorBound, out Rational value)
     {
         if (modulus.GetBitLength() > 126 || denominatorBound.IsZero)
-            return RationalReconstruction.TryReconstruct(a, modulus, numeratorBound, denominatorBound, out value);
+            return LehmerReconstruction.TryReconstruct(a, modulus, numeratorBound, denominatorBound, out value);
         value = default;
         UInt128 m = (UInt128)modulus, n = (UInt128)numeratorBound, dBound = (UInt128)denominatorBound;
         UInt128 r0 = m, r1 = (UInt128)a % m;

@@ -101,7 +101,7 @@ internal sealed class ModularEchelon : IDisposable
             int pivotRow = active[first];
             ulong pivot = t[pivotRow];
             u[r] = pivot;
-            ulong inv = reducer.Field.Inverse(pivot);
+            ulong inv = reducer.Inverse(pivot);
             for (int a = 0; a < activeCount; a++)
             {
                 int i = active[a];
@@ -163,7 +163,17 @@ internal sealed class ModularEchelon : IDisposable
             var u = _ut.AsSpan(pc * _stride, l2 + 1);
             for (int k = 0; k <= l2; k++) upp[k * r + l2] = u[k];
         }
-        for (int k = 0; k < r; k++) invDiag[k] = Reducer.Field.Inverse(upp[k * r + k]);
+        // All diagonal inverses from one inversion (Montgomery's trick): prefix products, one inverse,
+        // then back.
+        ulong acc = 1;
+        for (int k = 0; k < r; k++) { invDiag[k] = acc; acc = Reducer.Multiply(acc, upp[k * r + k]); }
+        ulong inv = Reducer.Inverse(acc);
+        for (int k = r - 1; k >= 0; k--)
+        {
+            ulong d = upp[k * r + k];
+            invDiag[k] = Reducer.Multiply(inv, invDiag[k]);
+            inv = Reducer.Multiply(inv, d);
+        }
         var x = new ulong[r];
         for (int q = 0; q < nf; q++)
         {

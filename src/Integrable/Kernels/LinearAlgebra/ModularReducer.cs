@@ -66,6 +66,23 @@ internal readonly struct ModularReducer
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public ulong Multiply(ulong a, ulong b) => Field.Multiply(a, b);
 
+    /// <summary>a⁻¹ mod p for a non-zero residue, by the extended Euclidean algorithm in word arithmetic
+    /// (all cofactors stay below p &lt; 2^62 in absolute value).</summary>
+    /// <exception cref="DivideByZeroException"><paramref name="a"/> is zero.</exception>
+    public ulong Inverse(ulong a)
+    {
+        if (a == 0) throw new DivideByZeroException($"zero has no inverse modulo {P}");
+        ulong r0 = P, r1 = a;
+        long t0 = 0, t1 = 1;
+        while (r1 != 0)
+        {
+            ulong q = r0 / r1;
+            (r0, r1) = (r1, r0 - q * r1);
+            (t0, t1) = (t1, t0 - (long)q * t1);
+        }
+        return t0 < 0 ? (ulong)(t0 + (long)P) : (ulong)t0;
+    }
+
     /// <summary>a − b mod p for residues a, b.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public ulong Subtract(ulong a, ulong b) => a >= b ? a - b : a + P - b;

@@ -86,4 +86,21 @@ public class ModularReducerTests
             if (System.Runtime.Intrinsics.X86.Avx512F.IsSupported && n >= 32) Assert.Equal(expected, r.DotAvx512(a, a));
         }
     }
+
+    [Theory]
+    [MemberData(nameof(Moduli))]
+    public void Inverse_TimesValue_IsOne(ulong p)
+    {
+        var r = new ModularReducer(new PrimeField(p));
+        var rng = new Random(9);
+        for (int t = 0; t < 2000; t++)
+        {
+            ulong a = t < 3 ? (ulong)t + 1 : (ulong)rng.NextInt64() % p;
+            if (a % p == 0) continue;
+            a %= p;
+            Assert.Equal(1UL, r.Multiply(a, r.Inverse(a)));
+        }
+        if (p > 2) Assert.Equal(1UL, r.Multiply(p - 1, r.Inverse(p - 1)));
+        Assert.Throws<DivideByZeroException>(() => r.Inverse(0));
+    }
 }

@@ -33,6 +33,25 @@ internal sealed class LinearAlgebraCrossoverWorkload : IWorkload
                 double ff = Time(EliminationMethod.FractionFree), mm = Time(EliminationMethod.Multimodular);
                 sb.AppendLine($"entries<{bound} {m}x{n}: fraction-free {ff:F1} us  multimodular {mm:F1} us");
             }
+        foreach (long bound in new long[] { 100, 1L << 40 })
+            foreach (int n in new[] { 4, 6, 8, 10, 12, 16, 24, 32 })
+            {
+                var mats = Enumerable.Range(0, 10).Select(_ => RationalMatrix.Create(n, n, (_, _) => rng.NextInt64(-bound, bound))).ToArray();
+                double Time(EliminationMethod method)
+                {
+                    double best = 1e9;
+                    for (int rep = 0; rep < 7; rep++)
+                    {
+                        var sw = Stopwatch.StartNew();
+                        foreach (var a in mats) a.Determinant(new EliminationOptions { Method = method });
+                        best = Math.Min(best, sw.Elapsed.TotalMilliseconds / mats.Length * 1000);
+                    }
+                    return best;
+                }
+                Time(EliminationMethod.FractionFree); Time(EliminationMethod.Multimodular);
+                double ff = Time(EliminationMethod.FractionFree), mm = Time(EliminationMethod.Multimodular);
+                sb.AppendLine($"determinant entries<{bound} {n}x{n}: fraction-free {ff:F1} us  multimodular {mm:F1} us");
+            }
         return sb.ToString();
     }
 }

@@ -97,7 +97,7 @@ public sealed partial class RationalMatrix
     /// <summary>The determinant.</summary>
     /// <returns>det A.</returns>
     /// <exception cref="DimensionMismatchException">The matrix is not square.</exception>
-    /// <remarks>Up to order 10 by fraction-free elimination; above, modulo enough primes to exceed twice
+    /// <remarks>Up to order 8 by fraction-free elimination; above, modulo enough primes to exceed twice
     /// the Hadamard bound (a proven bound, so the value is exact).</remarks>
     public Rational Determinant() => Determinant(EliminationOptions.Default);
 

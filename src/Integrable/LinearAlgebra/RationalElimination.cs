@@ -107,8 +107,7 @@ internal static class RationalElimination
         int limit = options.PrimeLimit ?? int.MaxValue;
         int[]? bestPivots = null;
         int[]? free = null;
-        BigInteger[]? residues = null;
-        BigInteger modulus = BigInteger.One;
+        MixedRadixAccumulator? residues = null;
         Rational[]? previous = null;
         bool mayVerifyEarly = true;
         int sentinel = -1;
@@ -143,7 +142,6 @@ internal static class RationalElimination
                 bestPivots = ech.PivotColumns;
                 free = ech.FreeColumns();
                 residues = null;
-                modulus = BigInteger.One;
                 previous = null;
                 sentinel = -1;
             }
@@ -156,15 +154,16 @@ internal static class RationalElimination
                 return new EchelonData<Rational>(m, c, bestPivots, free, []);
             }
             sw.Restart();
-            Accumulate(ref residues, ref modulus, e, p);
-            long bits = modulus.GetBitLength();
+            residues ??= new MixedRadixAccumulator(r * nf);
+            residues.Add(reducer, e);
+            long bits = residues.Modulus.GetBitLength();
             bool lastChance = used >= limit;
             if (bits < nextAttemptBits && !lastChance)
             {
                 if (diag is not null) diag.ReconstructionTime += sw.Elapsed;
                 continue;
             }
-            bool ok = TryReconstruct(residues!, modulus, r, nf, ref sentinel, out var candidate);
+            bool ok = TryReconstruct(residues, r, nf, ref sentinel, out var candidate);
             if (diag is not null) diag.ReconstructionTime += sw.Elapsed;
             nextAttemptBits = ok ? 0 : bits + Math.Max(1, bits / 5);
             if (!ok)
@@ -242,39 +241,19 @@ internal static class RationalElimination
         return f;
     }
 
-    private static void Accumulate(ref BigInteger[]? residues, ref BigInteger modulus, ulong[] image, ulong p)
-    {
-        if (residues is null)
-        {
-            residues = new BigInteger[image.Length];
-            for (int t = 0; t < image.Length; t++) residues[t] = image[t];
-            modulus = p;
-            return;
-        }
-        // Garner step: x = r + M·((s − r)·M⁻¹ mod p).
-        var field = Field(p);
-        ulong inv = field.Inverse((ulong)(modulus % p));
-        for (int t = 0; t < image.Length; t++)
-        {
-            ulong rp = (ulong)(residues[t] % p);
-            ulong diff = field.Subtract(image[t], rp);
-            if (diff != 0) residues[t] += modulus * field.Multiply(diff, inv);
-        }
-        modulus *= p;
-    }
-
     /// <summary>Rational reconstruction of every entry (row-major r × nf), column by column with a
     /// running common denominator, within the symmetric bounds N = D = ⌊√(M/2)⌋. The entry that failed
     /// last time (<paramref name="sentinel"/>) is tried first, so a premature attempt costs one
     /// reconstruction; on failure it is updated to the entry that failed.</summary>
-    private static bool TryReconstruct(BigInteger[] residues, BigInteger modulus, int r, int nf, ref int sentinel, out Rational[] values)
+    private static bool TryReconstruct(MixedRadixAccumulator residues, int r, int nf, ref int sentinel, out Rational[] values)
     {
         values = [];
-        var bound = RationalReconstruction.Sqrt(modulus / 2);
-        if (sentinel >= 0 && !residues[sentinel].IsZero && !TryReconstructOne(residues[sentinel], modulus, bound, bound, out _))
-            return false;
+        var modulus = residues.Modulus;
         var result = new Rational[r * nf];
-        if (modulus.GetBitLength() <= 63) return TryReconstructWord(residues, (ulong)modulus, r, nf, ref sentinel, result, out values);
+        if (residues.PrimeCount == 1) return TryReconstructWord(residues, (ulong)modulus, r, nf, ref sentinel, result, out values);
+        var bound = RationalReconstruction.Sqrt(modulus / 2);
+        if (sentinel >= 0 && !residues.IsZero(sentinel) && !TryReconstructOne(residues.Value(sentinel), modulus, bound, bound, out _))
+            return false;
         var half = modulus >> 1;
         // One running denominator for all entries: the entries of a reduced form share the
         // denominator of a pivot minor, so after the first full reconstruction the others are usually a
@@ -285,8 +264,8 @@ internal static class RationalElimination
             for (int k = 0; k < r; k++)
             {
                 int index = k * nf + q;
-                var a = residues[index];
-                if (a.IsZero) continue;
+                if (residues.IsZero(index)) continue;
+                var a = residues.Value(index);
                 var y = den.IsOne ? a : a * den % modulus;
                 var s = y > half ? y - modulus : y;
                 if (BigInteger.Abs(s) <= bound)
@@ -308,7 +287,7 @@ internal static class RationalElimination
     }
 
     /// <summary>The same for a modulus below 2^63 (one prime), in word arithmetic.</summary>
-    private static bool TryReconstructWord(BigInteger[] residues, ulong m, int r, int nf, ref int sentinel, Rational[] result, out Rational[] values)
+    private static bool TryReconstructWord(MixedRadixAccumulator residues, ulong m, int r, int nf, ref int sentinel, Rational[] result, out Rational[] values)
     {
         values = [];
         ulong bound = (ulong)RationalReconstruction.Sqrt(m / 2);
@@ -319,7 +298,7 @@ internal static class RationalElimination
             for (int k = 0; k < r; k++)
             {
                 int index = k * nf + q;
-                ulong a = (ulong)residues[index];
+                ulong a = residues.Word(index);
                 if (a == 0) continue;
                 ulong y = den == 1 ? a : (ulong)((UInt128)a * den % m);
                 long sv = y > half ? -(long)(m - y) : (long)y;

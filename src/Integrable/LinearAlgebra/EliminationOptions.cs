@@ -21,8 +21,9 @@ internal sealed class EliminationOptions
 {
     public static EliminationOptions Default { get; } = new();
 
-    /// <summary>The i-th prime to use (default: <see cref="Primes.Large"/>).</summary>
-    public Func<int, ulong> PrimeSequence { get; init; } = Primes.Large;
+    /// <summary>The i-th prime to use; null (the default) lets the elimination choose between
+    /// <see cref="Primes.Large"/> and the half-word primes by the size of the matrix.</summary>
+    public Func<int, ulong>? PrimeSequence { get; init; }
 
     public EliminationMethod Method { get; init; } = EliminationMethod.Auto;
 

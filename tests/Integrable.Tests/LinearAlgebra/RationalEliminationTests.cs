@@ -193,4 +193,23 @@ public class RationalEliminationTests
         for (int q = 0; q < k2.RowCount; q++) Assert.All(a.Multiply(k2.Row(q)), v => Assert.True(v.IsZero));
         AssertMatchesReference(a, a.ReducedRowEchelonForm());
     }
+
+    [Fact]
+    public void LargeMatrix_HalfWordPrimes_UnluckyFirstPrimeRecovered()
+    {
+        // 64×70 is above the size where the half-word primes (below 2^31) are used; column 0 is a
+        // multiple of the first of them, so the first image is unlucky.
+        ulong h0 = Integrable.Kernels.LinearAlgebra.HalfWordPrimes.Get(0);
+        Assert.True(h0 < (1UL << 31) && Primes.IsPrime(h0));
+        Assert.Equal(h0, RationalElimination.PrimeSupply(EliminationOptions.Default, 64, 70)(0));
+        Assert.Equal(P0, RationalElimination.PrimeSupply(EliminationOptions.Default, 8, 9)(0));
+        var rng = new Random(12);
+        var a = RationalMatrix.Create(64, 70, (i, j) => j == 0 ? (Rational)(new BigInteger(h0) * rng.Next(1, 9)) : rng.Next(-20, 21));
+        var diag = new EliminationDiagnostics();
+        var ours = Run(a, new EliminationOptions { Method = EliminationMethod.Multimodular, Diagnostics = diag });
+        var reference = Run(a, new EliminationOptions { Method = EliminationMethod.FractionFree });
+        Assert.Equal(reference.PivotColumns.ToArray(), ours.PivotColumns.ToArray());
+        Assert.Equal(reference.Matrix, ours.Matrix);
+        Assert.True(diag.UnluckyPrimes >= 1, diag.ToString());
+    }
 }

@@ -139,8 +139,54 @@ internal readonly struct ModularReducer
         int n = a.Length;
         if (n == 0) return 0;
         if (b.Length < n) throw new ArgumentException("dot product of spans of different lengths");
+        if (P <= HalfWordLimit)
+            return n >= HalfWordVectorThreshold && Avx512F.IsSupported ? DotHalfWordAvx512(a, b) : DotHalfWordScalar(a, b);
         if (n >= VectorDotThreshold && Avx512F.IsSupported) return DotAvx512(a, b);
         return DotScalar(a, b);
+    }
+
+    /// <summary>Moduli up to this bound (2^31) have residues that fit in 31 bits, so a product fits in
+    /// 62 bits and four products fit in a word: the half-word kernels need no splitting and no carries.</summary>
+    internal const ulong HalfWordLimit = 1UL << 31;
+
+    /// <summary>Dot products at least this long use the half-word AVX-512 kernel.</summary>
+    internal const int HalfWordVectorThreshold = 32;
+
+    /// <summary>Σ a[i]·b[i] mod p for p ≤ 2^31, scalar: four products per word, then one reduction.</summary>
+    internal ulong DotHalfWordScalar(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
+    {
+        int n = a.Length;
+        ulong acc = 0;
+        int i = 0;
+        for (; i + 4 <= n; i += 4)
+            acc = Reduce64(acc + a[i] * b[i] + a[i + 1] * b[i + 1] + a[i + 2] * b[i + 2]) + a[i + 3] * b[i + 3];
+        for (; i < n; i++) acc = Reduce64(acc) + a[i] * b[i];
+        return Reduce64(acc);
+    }
+
+    /// <summary>Σ a[i]·b[i] mod p for p ≤ 2^31 with AVX-512: one 32×32→64-bit multiply per term and lane,
+    /// four rounds per lane before the lane sums are split into 32-bit halves and added to wide accumulators.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal ulong DotHalfWordAvx512(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
+    {
+        int n = a.Length;
+        ref ulong ra = ref MemoryMarshal.GetReference(a);
+        ref ulong rb = ref MemoryMarshal.GetReference(b);
+        var mask32 = Vector512.Create(0xFFFFFFFFUL);
+        Vector512<ulong> wl = default, wh = default;
+        int i = 0;
+        while (n - i >= 32)
+        {
+            var s = Avx512F.Multiply(Vector512.LoadUnsafe(ref ra, (nuint)i).AsUInt32(), Vector512.LoadUnsafe(ref rb, (nuint)i).AsUInt32());
+            s += Avx512F.Multiply(Vector512.LoadUnsafe(ref ra, (nuint)(i + 8)).AsUInt32(), Vector512.LoadUnsafe(ref rb, (nuint)(i + 8)).AsUInt32());
+            s += Avx512F.Multiply(Vector512.LoadUnsafe(ref ra, (nuint)(i + 16)).AsUInt32(), Vector512.LoadUnsafe(ref rb, (nuint)(i + 16)).AsUInt32());
+            s += Avx512F.Multiply(Vector512.LoadUnsafe(ref ra, (nuint)(i + 24)).AsUInt32(), Vector512.LoadUnsafe(ref rb, (nuint)(i + 24)).AsUInt32());
+            wl += s & mask32;
+            wh += Vector512.ShiftRightLogical(s, 32);
+            i += 32;
+        }
+        ulong r = Wide(wl, wh);
+        return i < n ? Add(r, DotHalfWordScalar(a[i..], b[i..])) : r;
     }
 
     /// <summary>Σ a[i]·b[i] mod p with AVX-512: every residue (below 2^62) is split into 31-bit halves,

@@ -6,7 +6,7 @@ namespace Integrable.Tests.Kernels.LinearAlgebra;
 
 public class ModularReducerTests
 {
-    public static TheoryData<ulong> Moduli => new() { 2, 3, 101, 4294967291UL, 4294967311UL, 2305843009213693951UL, Primes.Large(0), Primes.Large(3) };
+    public static TheoryData<ulong> Moduli => new() { 2, 3, 101, 2147483629UL, 2147483647UL /* 2^31 − 1 */, 4294967291UL, 4294967311UL, 2305843009213693951UL, Primes.Large(0), Primes.Large(3) };
 
     [Theory]
     [MemberData(nameof(Moduli))]

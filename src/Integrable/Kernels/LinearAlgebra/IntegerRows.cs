@@ -213,6 +213,16 @@ internal sealed class IntegerRows : IDisposable
                 if (!TryMultiply(l / g, d, out l)) { ArrayPool<long>.Shared.Return(b); return null; }
             }
             sc[i] = l;
+            if (l == 1)
+            {
+                // An integer row: the numerators are the entries.
+                for (int j = 0; j < cols; j++)
+                {
+                    a[i * cols + j].TryGetSmall(out long n, out _);
+                    b[i * cols + j] = n;
+                }
+                continue;
+            }
             for (int j = 0; j < cols; j++)
             {
                 a[i * cols + j].TryGetSmall(out long n, out long d);

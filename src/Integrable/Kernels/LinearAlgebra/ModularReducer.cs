@@ -150,7 +150,7 @@ internal readonly struct ModularReducer
     internal const ulong HalfWordLimit = 1UL << 31;
 
     /// <summary>Dot products at least this long use the half-word AVX-512 kernel.</summary>
-    internal const int HalfWordVectorThreshold = 32;
+    internal const int HalfWordVectorThreshold = 16;
 
     /// <summary>Σ a[i]·b[i] mod p for p ≤ 2^31, scalar: four products per word, then one reduction.</summary>
     internal ulong DotHalfWordScalar(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
@@ -184,6 +184,12 @@ internal readonly struct ModularReducer
             wl += s & mask32;
             wh += Vector512.ShiftRightLogical(s, 32);
             i += 32;
+        }
+        for (; n - i >= 8; i += 8)
+        {
+            var s = Avx512F.Multiply(Vector512.LoadUnsafe(ref ra, (nuint)i).AsUInt32(), Vector512.LoadUnsafe(ref rb, (nuint)i).AsUInt32());
+            wl += s & mask32;
+            wh += Vector512.ShiftRightLogical(s, 32);
         }
         ulong r = Wide(wl, wh);
         return i < n ? Add(r, DotHalfWordScalar(a[i..], b[i..])) : r;

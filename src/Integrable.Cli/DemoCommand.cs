@@ -1,52 +1,56 @@
 using Integrable.Algebra;
 using Integrable.Numbers;
+using Integrable.Polynomials;
 using Integrable.Recursions;
 
 namespace Integrable.Cli;
 
 /// <summary>The built-in example run when no command is given: a weighted three-step product
-/// recursion of our own, iterated exactly over Q and, from the same compiled rule, over Z/pZ.</summary>
+/// recursion of our own, read from text, compiled once, and run exactly over Q, over Z/pZ and over
+/// Laurent polynomials in symbolic initial values.</summary>
 internal sealed class DemoCommand : CliCommand
 {
+    internal const string Equation = "y_{n+3} y_n = y_{n+2} y_{n+1} + w";
+
     public override string Name => "demo";
     public override string Summary => "run the built-in example (a weighted three-step product recursion)";
     public override string Usage => "[--steps N]";
-    public override string Example => "integrable demo --steps 15";
+    public override string Example => "integrable demo --steps 12";
     public override int MaxPositionals => 0;
-    public override IReadOnlyList<CliOption> Options { get; } = [new("steps", "N", "number of new terms (default 15)")];
+    public override IReadOnlyList<CliOption> Options { get; } = [new("steps", "N", "number of new terms (default 12)")];
 
     public override int Execute(ParsedArguments args, CliContext context)
     {
-        int steps = args.GetInt("steps", 15, 1, 10_000);
+        int steps = args.GetInt("steps", 12, 1, 200);
         var o = context.Out;
-        o.WriteLine("Example: the weighted three-step product recursion  y_{n+3} y_n = y_{n+2} y_{n+1} + w,  w = 2");
-        o.WriteLine("from y_0 = y_1 = y_2 = 1. The rule is compiled once to a straight-line program and run");
-        o.WriteLine("exactly over Q and over Z/pZ.");
-        o.WriteLine();
-        // rule: y_{n+3} = (y_{n+2} y_{n+1} + w) / y_n with inputs (y_n, y_{n+1}, y_{n+2}, w)
-        var b = new StraightLineProgramBuilder(4);
-        var rule = b.Build(b.Divide(b.Add(b.Multiply(b.Input(2), b.Input(1)), b.Input(3)), b.Input(0)));
-        o.WriteLine("compiled rule:");
-        o.Write(rule.ToString());
+        var r = Recurrence.Parse(Equation);
+        o.WriteLine($"Example recursion:  {Equation}   (order {r.Order}, parameter {string.Join(", ", r.Parameters)})");
+        o.WriteLine("It is compiled once into a straight-line program and evaluated in three domains.");
         o.WriteLine();
 
-        var q = RationalField.Instance;
-        var values = new List<Rational> { 1, 1, 1 };
-        for (int n = 0; n < steps; n++)
-        {
-            context.Cancellation.ThrowIfCancellationRequested();
-            values.Add(rule.Evaluate(q, [values[^3], values[^2], values[^1], new Rational(2)]));
-        }
-        o.WriteLine("exact values: " + string.Join(", ", values));
-        bool integral = values.All(v => v.IsInteger);
-        o.WriteLine($"all values integers: {(integral ? "yes" : "no")} (a sign of the Laurent property)");
+        var values = r.Iterate(RationalField.Instance, [1, 1, 1], steps, [new Rational(2)], cancellation: context.Cancellation);
+        o.WriteLine($"1. Exactly over Q from y_0 = y_1 = y_2 = 1, w = 2:");
+        o.WriteLine("   " + string.Join(", ", values));
+        o.WriteLine($"   all integers: {(values.All(v => v.IsInteger) ? "yes" : "no")}");
 
         var field = new PrimeField(Primes.Large(0));
-        var residues = new List<ulong> { 1, 1, 1 };
-        for (int n = 0; n < steps; n++)
-            residues.Add(rule.Evaluate(field, [residues[^3], residues[^2], residues[^1], 2UL]));
-        bool agree = values.Select(v => field.FromRational(v)).SequenceEqual(residues);
-        o.WriteLine($"same orbit modulo p = {field.Modulus}: {(agree ? "yes" : "NO")}");
-        return agree ? 0 : 1;
+        var residues = r.Iterate<ulong>(field, [1, 1, 1], steps, [2], cancellation: context.Cancellation);
+        bool agree = values.Select(field.FromRational).SequenceEqual(residues);
+        o.WriteLine($"2. Modulo p = {field.Modulus}: same orbit reduced mod p: {(agree ? "yes" : "NO")}");
+
+        var ring = new LaurentPolynomialRing("y_0", "y_1", "y_2", "w");
+        var symbolic = r.Iterate(ring, [ring.Variable(0), ring.Variable(1), ring.Variable(2)], steps, [ring.Variable(3)],
+            cancellation: context.Cancellation);
+        o.WriteLine("3. Over Laurent polynomials in y_0, y_1, y_2, w (every division exact):");
+        for (int j = 3; j < symbolic.Count; j++)
+        {
+            var p = symbolic[j];
+            bool positive = p.Coefficients.ToArray().All(c => c.Sign > 0);
+            string shown = p.TermCount <= 4 ? $" = {p}" : "";
+            o.WriteLine($"   {r.TermName(j),-6} {p.TermCount,5} terms, positive coefficients: {(positive ? "yes" : "no")}{shown}");
+        }
+        var check = symbolic.Select(p => p.Evaluate([1, 1, 1, 2])).SequenceEqual(values);
+        o.WriteLine($"   the Laurent iterates at (1, 1, 1, 2) give the orbit of step 1: {(check ? "yes" : "NO")}");
+        return agree && check ? 0 : 1;
     }
 }

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 using Integrable.Numbers;
 
@@ -9,6 +10,7 @@ internal static class CoefficientForm
 {
     /// <summary>Writes c_i = words_i / denominator with every words_i and the denominator in a word
     /// (|words_i| &lt; 2^63). Fails when some value does not fit.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryWords(ReadOnlySpan<Rational> c, out long[] words, out long denominator)
     {
         words = new long[c.Length];
@@ -40,7 +42,24 @@ internal static class CoefficientForm
         return true;
     }
 
+    /// <summary>Writes c_i = wide_i / denominator with every |wide_i| &lt; 2^126 (the dividend form of
+    /// exact division). Fails when some value does not fit.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public static bool TryWide(ReadOnlySpan<Rational> c, out Int128[] wide, out BigInteger denominator)
+    {
+        ToBig(c, out var ints, out denominator);
+        wide = new Int128[c.Length];
+        var limit = BigInteger.One << 126;
+        for (int i = 0; i < ints.Length; i++)
+        {
+            if (BigInteger.Abs(ints[i]) >= limit) return false;
+            wide[i] = (Int128)ints[i];
+        }
+        return true;
+    }
+
     /// <summary>Writes c_i = ints_i / denominator with big integers.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void ToBig(ReadOnlySpan<Rational> c, out BigInteger[] ints, out BigInteger denominator)
     {
         denominator = BigInteger.One;

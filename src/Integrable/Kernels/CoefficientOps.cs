@@ -18,13 +18,18 @@ internal interface ICoefficientOps<TCoef, TAcc>
     /// <summary>acc −= a·b.</summary>
     static abstract void MulSub(ref TAcc acc, TCoef a, TCoef b);
 
-    /// <summary>dest[off[j]] += a·b[j] for j in [0, count): the inner loop of the dense method.</summary>
-    static abstract void MulAddRow(ref TAcc dest, TCoef a, ref TCoef b, ref int off, int count);
+    /// <summary>dest[off[j]] += a·b[j] for j in [0, count), with <paramref name="off"/> given in
+    /// bytes: the inner loop of the dense method.</summary>
+    static abstract void MulAddRow(ref TAcc dest, TCoef a, ref TCoef b, ref nint off, int count);
 
-    /// <summary>A block of the dense method: buf[la[i] + lb[j]] += a[i]·b[j] for i &lt; na, j &lt; nb.
+    /// <summary>A block of the dense method: buf[la[i] + lb[j]] += a[i]·b[j] for i &lt; na, j &lt; nb
+    /// (la in cells, lb in bytes, so the inner loop adds a precomputed byte offset).
     /// Implementations are separate non-inlined methods so that the JIT allocates registers for this
     /// loop nest alone.</summary>
-    static abstract void MulAddBlock(ref TAcc buf, ref TCoef a, ref int la, int na, ref TCoef b, ref int lb, int nb);
+    static abstract void MulAddBlock(ref TAcc buf, ref TCoef a, ref int la, int na, ref TCoef b, ref nint lb, int nb);
+
+    /// <summary>buf[la[i] + lb[j]] −= a[i]·b[j] for i &lt; na, j &lt; nb (dense exact division).</summary>
+    static abstract void MulSubBlock(ref TAcc buf, ref TCoef a, ref int la, int na, ref TCoef b, ref int lb, int nb);
 
     /// <summary>acc = a.</summary>
     static abstract void Set(out TAcc acc, TCoef a);
@@ -55,14 +60,31 @@ internal struct Word64Ops : ICoefficientOps<long, long>
     public static void MulSub(ref long acc, long a, long b) => acc -= a * b;
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static void MulAddRow(ref long dest, long a, ref long b, ref int off, int count)
+    public static void MulAddRow(ref long dest, long a, ref long b, ref nint off, int count)
     {
-        for (int j = 0; j < count; j++)
-            Unsafe.Add(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
+        nint j = 0;
+        for (; j + 1 < count; j += 2)
+        {
+            Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
+            Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j + 1)) += a * Unsafe.Add(ref b, j + 1);
+        }
+        if (j < count) Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref long buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    public static void MulSubBlock(ref long buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref long row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulAddBlock(ref long buf, ref long a, ref int la, int na, ref long b, ref nint lb, int nb)
     {
         for (int i = 0; i < na; i++)
             MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
@@ -106,7 +128,7 @@ internal struct Word128Ops : ICoefficientOps<long, Int128>
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static void MulAddRow(ref Int128 dest, long a, ref long b, ref int off, int count)
+    public static void MulAddRow(ref Int128 dest, long a, ref long b, ref nint off, int count)
     {
         // Unsigned 64×64→128 product corrected to the signed one: hi −= (a<0 ? b : 0) + (b<0 ? a : 0).
         ref ulong d = ref Unsafe.As<Int128, ulong>(ref dest);
@@ -117,7 +139,7 @@ internal struct Word128Ops : ICoefficientOps<long, Int128>
             long bj = Unsafe.Add(ref b, j);
             ulong lo = ua * (ulong)bj;
             ulong hi = UWord128Ops.MulHigh(ua, (ulong)bj) - (ulong)((aSign & bj) + ((bj >> 63) & a));
-            ref ulong s = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j) * 2);
+            ref ulong s = ref Unsafe.AddByteOffset(ref d, Unsafe.Add(ref off, j));
             ulong nlo = s + lo;
             Unsafe.Add(ref s, 1) += hi + (nlo < lo ? 1UL : 0UL);
             s = nlo;
@@ -125,7 +147,30 @@ internal struct Word128Ops : ICoefficientOps<long, Int128>
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    public static void MulSubBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        ref ulong d = ref Unsafe.As<Int128, ulong>(ref buf);
+        for (int i = 0; i < na; i++)
+        {
+            long ai = Unsafe.Add(ref a, i);
+            ulong ua = (ulong)ai;
+            long aSign = ai >> 63;
+            ref ulong row = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref la, i) * 2);
+            for (int j = 0; j < nb; j++)
+            {
+                long bj = Unsafe.Add(ref b, j);
+                ulong lo = (ulong)bj * ua;
+                ulong hi = UWord128Ops.MulHigh((ulong)bj, ua) - (ulong)((aSign & bj) + ((bj >> 63) & ai));
+                ref ulong c = ref Unsafe.Add(ref row, (nint)Unsafe.Add(ref lb, j) * 2);
+                ulong old = c;
+                Unsafe.Add(ref c, 1) -= hi + (old < lo ? 1UL : 0UL);
+                c = old - lo;
+            }
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulAddBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref nint lb, int nb)
     {
         for (int i = 0; i < na; i++)
             MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
@@ -164,7 +209,7 @@ internal struct UWord128Ops : ICoefficientOps<long, Int128>
     public static void MulSub(ref Int128 acc, long a, long b) => Word128Ops.MulSub(ref acc, a, b);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static void MulAddRow(ref Int128 dest, long a, ref long b, ref int off, int count)
+    public static void MulAddRow(ref Int128 dest, long a, ref long b, ref nint off, int count)
     {
         ref ulong d = ref Unsafe.As<Int128, ulong>(ref dest);
         ulong ua = (ulong)a;
@@ -173,7 +218,7 @@ internal struct UWord128Ops : ICoefficientOps<long, Int128>
             ulong bj = (ulong)Unsafe.Add(ref b, j);
             ulong hi = MulHigh(ua, bj);
             ulong lo = ua * bj;
-            ref ulong s = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j) * 2);
+            ref ulong s = ref Unsafe.AddByteOffset(ref d, Unsafe.Add(ref off, j));
             ulong nlo = s + lo;
             Unsafe.Add(ref s, 1) += hi + (nlo < lo ? 1UL : 0UL);
             s = nlo;
@@ -188,7 +233,19 @@ internal struct UWord128Ops : ICoefficientOps<long, Int128>
         System.Runtime.Intrinsics.X86.Bmi2.X64.IsSupported ? System.Runtime.Intrinsics.X86.Bmi2.X64.MultiplyNoFlags(a, b) : Math.BigMul(a, b, out _);
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    public static void MulSubBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref Int128 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulAddBlock(ref Int128 buf, ref long a, ref int la, int na, ref long b, ref nint lb, int nb)
     {
         for (int i = 0; i < na; i++)
             MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
@@ -236,35 +293,51 @@ internal struct UWord96Ops : ICoefficientOps<long, Split96>
         throw new InvalidOperationException("Split96 accumulators only add non-negative products.");
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static void MulAddRow(ref Split96 dest, long a, ref long b, ref int off, int count)
+    public static void MulAddRow(ref Split96 dest, long a, ref long b, ref nint off, int count)
     {
         ref ulong d = ref Unsafe.As<Split96, ulong>(ref dest);
         ulong ua = (ulong)a;
-        int j = 0;
+        nint j = 0;
         for (; j + 1 < count; j += 2)
         {
-            ulong b0 = (ulong)Unsafe.Add(ref b, j), b1 = (ulong)Unsafe.Add(ref b, j + 1);
-            ulong lo0 = b0 * ua, hi0 = UWord128Ops.MulHigh(b0, ua);
-            ulong lo1 = b1 * ua, hi1 = UWord128Ops.MulHigh(b1, ua);
-            ref ulong c0 = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j) * 2);
-            ref ulong c1 = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j + 1) * 2);
+            ulong b0 = (ulong)Unsafe.Add(ref b, j);
+            ulong hi0 = UWord128Ops.MulHigh(b0, ua);
+            ulong lo0 = b0 * ua;
+            ref ulong c0 = ref Unsafe.AddByteOffset(ref d, Unsafe.Add(ref off, j));
             c0 += (uint)lo0;
             Unsafe.Add(ref c0, 1) += (hi0 << 32) | (lo0 >> 32);
+            ulong b1 = (ulong)Unsafe.Add(ref b, j + 1);
+            ulong hi1 = UWord128Ops.MulHigh(b1, ua);
+            ulong lo1 = b1 * ua;
+            ref ulong c1 = ref Unsafe.AddByteOffset(ref d, Unsafe.Add(ref off, j + 1));
             c1 += (uint)lo1;
             Unsafe.Add(ref c1, 1) += (hi1 << 32) | (lo1 >> 32);
         }
         if (j < count)
         {
             ulong bj = (ulong)Unsafe.Add(ref b, j);
-            ulong lo = bj * ua, hi = UWord128Ops.MulHigh(bj, ua);
-            ref ulong c = ref Unsafe.Add(ref d, (nint)Unsafe.Add(ref off, j) * 2);
+            ulong hi = UWord128Ops.MulHigh(bj, ua);
+            ulong lo = bj * ua;
+            ref ulong c = ref Unsafe.AddByteOffset(ref d, Unsafe.Add(ref off, j));
             c += (uint)lo;
             Unsafe.Add(ref c, 1) += (hi << 32) | (lo >> 32);
         }
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref Split96 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    public static void MulSubBlock(ref Split96 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref Split96 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulAddBlock(ref Split96 buf, ref long a, ref int la, int na, ref long b, ref nint lb, int nb)
     {
         for (int i = 0; i < na; i++)
             MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
@@ -334,10 +407,10 @@ internal struct Word192Ops : ICoefficientOps<long, Int192>
         Add(ref acc, l, m, h);
     }
 
-    public static void MulAddRow(ref Int192 dest, long a, ref long b, ref int off, int count)
+    public static void MulAddRow(ref Int192 dest, long a, ref long b, ref nint off, int count)
     {
         for (int j = 0; j < count; j++)
-            MulAdd(ref Unsafe.Add(ref dest, Unsafe.Add(ref off, j)), a, Unsafe.Add(ref b, j));
+            MulAdd(ref Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)), a, Unsafe.Add(ref b, j));
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -355,7 +428,19 @@ internal struct Word192Ops : ICoefficientOps<long, Int192>
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    public static void MulSubBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref Int192 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            long ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulAddBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref nint lb, int nb)
     {
         for (int i = 0; i < na; i++)
             MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
@@ -394,14 +479,26 @@ internal struct BigOps : ICoefficientOps<BigInteger, BigInteger>
 
     public static void MulSub(ref BigInteger acc, BigInteger a, BigInteger b) => acc -= a * b;
 
-    public static void MulAddRow(ref BigInteger dest, BigInteger a, ref BigInteger b, ref int off, int count)
+    public static void MulAddRow(ref BigInteger dest, BigInteger a, ref BigInteger b, ref nint off, int count)
     {
         for (int j = 0; j < count; j++)
-            Unsafe.Add(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
+            Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
     }
 
     [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref int lb, int nb)
+    public static void MulSubBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref BigInteger row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            BigInteger ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulAddBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref nint lb, int nb)
     {
         for (int i = 0; i < na; i++)
             MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 
 namespace Integrable.Kernels;
@@ -67,6 +68,7 @@ internal sealed class ExponentLayout
 
     /// <summary>Packs term-major exponents (<paramref name="nvars"/> per term) shifted by
     /// <paramref name="offset"/> into <paramref name="packed"/> (Words per term).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Pack(ReadOnlySpan<int> exps, int nvars, ReadOnlySpan<int> offset, Span<ulong> packed)
     {
         int terms = exps.Length / nvars;
@@ -84,6 +86,7 @@ internal sealed class ExponentLayout
     }
 
     /// <summary>Unpacks <paramref name="terms"/> vectors and adds <paramref name="offset"/> back.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Unpack(ReadOnlySpan<ulong> packed, int terms, int nvars, ReadOnlySpan<long> offset, Span<int> exps)
     {
         for (int t = 0; t < terms; t++)

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Integrable.Numbers;
 
 namespace Integrable.Kernels;
@@ -6,6 +7,7 @@ namespace Integrable.Kernels;
 internal static class PolynomialAdd
 {
     /// <summary>A ± B for canonical inputs (descending lex, n exponents per term); the result is canonical.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void Merge(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
         int n, bool subtract, out Rational[] coeffs, out int[] exps)
     {

@@ -30,16 +30,17 @@ internal enum DivideStatus
 /// the divisor does not divide. On success the remainder is zero by construction, so the quotient is
 /// verified exactly.</para>
 /// </remarks>
-internal static class PolynomialDivide
+internal static partial class PolynomialDivide
 {
     /// <summary>Single-word exact division. Returns the status and, when exact, the quotient terms.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static DivideStatus DivideHeap1<TOps, TC, TAcc>(
-        ReadOnlySpan<ulong> ep, ReadOnlySpan<TC> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd,
-        ulong guard, ulong qMax, TC limit, out ulong[] qe, out TC[] qc, out int qCount)
+        ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd,
+        ulong guard, ulong qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int np = ep.Length, nd = ed.Length;
+        double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap];
         qc = new TC[cap];
@@ -61,7 +62,7 @@ internal static class PolynomialDivide
             else exp = hexp[1];
 
             TAcc acc;
-            if (pi < np && ep[pi] == exp) { TOps.Set(out acc, cp[pi]); pi++; }
+            if (pi < np && ep[pi] == exp) { acc = cp[pi]; pi++; }
             else TOps.Set(out acc, default!);
 
             int sp = 0;
@@ -105,7 +106,9 @@ internal static class PolynomialDivide
             ulong t = exp - d0;
             if ((t & guard) != 0 || exp < d0 || ((qMax - t) & guard) != 0 || t > qMax) return DivideStatus.NotDivisible;
             int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
-            if (st != 0) return st == 1 ? DivideStatus.NotDivisible : DivideStatus.TooLarge;
+            if (st == 1) return DivideStatus.NotDivisible;
+            qSum += magnitude(q);
+            if (st == 2 || qSum > qSumLimit) return DivideStatus.TooLarge;
             if (qCount == qe.Length)
             {
                 int size = qe.Length * 2;
@@ -155,11 +158,12 @@ internal static class PolynomialDivide
     /// significant; fields never straddle words, so words are subtracted independently).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static DivideStatus DivideHeapN<TOps, TC, TAcc>(
-        ReadOnlySpan<ulong> ep, ReadOnlySpan<TC> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd, int words,
-        ReadOnlySpan<ulong> guard, ReadOnlySpan<ulong> qMax, TC limit, out ulong[] qe, out TC[] qc, out int qCount)
+        ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd, int words,
+        ReadOnlySpan<ulong> guard, ReadOnlySpan<ulong> qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int N = words, np = cp.Length, nd = cd.Length;
+        double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap * N];
         qc = new TC[cap];
@@ -185,7 +189,7 @@ internal static class PolynomialDivide
             }
 
             TAcc acc;
-            if (pi < np && ep.Slice(pi * N, N).SequenceEqual(exp)) { TOps.Set(out acc, cp[pi]); pi++; }
+            if (pi < np && ep.Slice(pi * N, N).SequenceEqual(exp)) { acc = cp[pi]; pi++; }
             else TOps.Set(out acc, default!);
 
             int sp = 0;
@@ -238,7 +242,9 @@ internal static class PolynomialDivide
                     return DivideStatus.NotDivisible;
             }
             int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
-            if (st != 0) return st == 1 ? DivideStatus.NotDivisible : DivideStatus.TooLarge;
+            if (st == 1) return DivideStatus.NotDivisible;
+            qSum += magnitude(q);
+            if (st == 2 || qSum > qSumLimit) return DivideStatus.TooLarge;
             if (qCount == qc.Length)
             {
                 int size = qc.Length * 2;
@@ -288,11 +294,25 @@ internal static class PolynomialDivide
         next[row] = -1;
     }
 
+    /// <summary>Forces the dense (true) or heap (false) division on the current thread; null dispatches.</summary>
+    [ThreadStatic] internal static bool? ForceDense;
+
+    /// <summary>Dense division is chosen only when the dividend's degree box has at most this many
+    /// cells per dividend term (the scan of each window costs one cell visit).</summary>
+    internal static double DenseBoxPerTerm = 64;
+
     /// <summary>Divides A by B exactly in the Laurent ring (A, B canonical and non-empty; B not a
     /// monomial). Both are first divided by their monomial content (per-variable minimum exponents),
     /// which makes them polynomials not divisible by any variable; then A/B is a Laurent polynomial
     /// iff B₀ divides A₀ as polynomials, and the quotient is x^(minA − minB)·A₀/B₀.</summary>
+    /// <remarks>Dispatch: the divisor is made primitive with word coefficients and the dividend put
+    /// in 128-bit form when possible; then dense division (<see cref="DivideDense"/>) when the
+    /// dividend's degree box has aligned windows and at most <see cref="DenseBoxPerTerm"/> cells per
+    /// dividend term, else heap division; with 64-, then 128-, then 192-bit accumulators (each attempt
+    /// stops with <see cref="DivideStatus.TooLarge"/> as soon as its bound could be exceeded), and big
+    /// integers when the coefficients do not fit words.</remarks>
     /// <returns>True with the quotient when B divides A; false otherwise.</returns>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryDivide(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
         int n, out Rational[] coeffs, out int[] exps)
     {
@@ -302,6 +322,8 @@ internal static class PolynomialDivide
         ProductShape.MinMax(eb, n, out var minB, out var maxB);
         var qRange = new long[n];
         var offset = new long[n];
+        var radix = new long[n];
+        long box = 1;
         for (int v = 0; v < n; v++)
         {
             long ra = (long)maxA[v] - minA[v], rb = (long)maxB[v] - minB[v];
@@ -309,56 +331,59 @@ internal static class PolynomialDivide
             qRange[v] = ra - rb;
             offset[v] = (long)minA[v] - minB[v];
             if (offset[v] < int.MinValue || offset[v] + qRange[v] > int.MaxValue) return false;
+            radix[v] = ra + 1;
+            box = box > long.MaxValue / radix[v] ? long.MaxValue : box * radix[v];
         }
         // Leading and trailing terms of A₀ must be those of B₀ times those of the quotient.
         if (!ShiftedDivides(ea[..n], minA, eb[..n], minB, qRange) ||
             !ShiftedDivides(ea[^n..], minA, eb[^n..], minB, qRange))
             return false;
-        if (ca.Length < cb.Length) return false;
 
-        var maxValue = new long[n];
-        for (int v = 0; v < n; v++) maxValue[v] = (long)maxA[v] - minA[v];
-        var layout = ExponentLayout.Create(maxValue, guard: true);
-        int N = layout.Words;
-        var pa = new ulong[ca.Length * N];
-        var pb = new ulong[cb.Length * N];
-        layout.Pack(ea, n, minA, pa);
-        layout.Pack(eb, n, minB, pb);
-        var qMaxPacked = new ulong[N];
+        var ctx = new DivisionInput(ca, ea, cb, eb, n, minA, minB, qRange, offset, radix, box);
+        if (CoefficientForm.TryWords(cb, out var wb, out long db) && CoefficientForm.TryWide(ca, out var pw, out var dp))
         {
-            var tmp = new int[n];
-            for (int v = 0; v < n; v++) tmp[v] = (int)qRange[v];
-            layout.Pack(tmp, n, new int[n], qMaxPacked);
-        }
-
-        DivideStatus status;
-        ulong[] qe;
-        int qCount;
-        Rational scale;
-        Rational[] result;
-        if (CoefficientForm.TryWords(ca, out var wa, out long da) && CoefficientForm.TryWords(cb, out var wb, out long db))
-        {
-            // B = c·B''/db with B'' primitive; A = A'/da; A/B = db/(da·c) · A'/B''.
+            // B = c·B''/db with B'' primitive; A = A'/dp; A/B = db/(dp·c) · A'/B''.
             ulong g = 0;
             foreach (var x in wb) g = IntegerMath.Gcd(g, IntegerMath.UnsignedAbs(x));
             long c = wb[0] < 0 ? -(long)g : (long)g;
             if (c != 1) for (int i = 0; i < wb.Length; i++) wb[i] /= c;
-            int bitsB = CoefficientBounds.MaxBits(wb) + CoefficientBounds.Bits((ulong)wb.Length);
-            Int128 lim = (Int128.One << 125) >> bitsB;
-            long limit = lim > long.MaxValue ? long.MaxValue : (long)lim;
-            long[] qw;
-            status = N == 1
-                ? DivideHeap1<Word128Ops, long, Int128>(pa, wa, pb, wb, layout.GuardMask[0], qMaxPacked[0], limit, out qe, out qw, out qCount)
-                : DivideHeapN<Word128Ops, long, Int128>(pa, wa, pb, wb, N, layout.GuardMask, qMaxPacked, limit, out qe, out qw, out qCount);
-            if (status == DivideStatus.NotDivisible) return false;
-            if (status == DivideStatus.Exact)
+            var scale = new Rational(db) / (new Rational(dp) * new Rational(c));
+            double maxP = 0, maxD = 0, l1P = 0, l1D = 0;
+            foreach (var x in pw) { double m = Math.Abs((double)x); maxP = Math.Max(maxP, m); l1P += m; }
+            foreach (var x in wb) { double m = Math.Abs((double)x); maxD = Math.Max(maxD, m); l1D += m; }
+            // ‖Q‖₁ ≥ ‖P‖₁/‖D‖₁, so an accumulator whose Σ|q| limit is below that cannot succeed.
+            double qL1Lower = l1P / l1D * 0.99;
+            // Partial sums are bounded by max|P| + Σ|q|·max|D|; the factor 1/2 absorbs rounding.
+            double Limit(int bits) => (Math.ScaleB(1.0, bits) - maxP) / maxD / 2;
+            Func<long, double> mag = static q => Math.Abs((double)q);
+            DivideStatus status = DivideStatus.TooLarge;
+            long[]? qw = null;
+            if (maxP < Math.ScaleB(1.0, 62) && qL1Lower <= Limit(62))
             {
-                scale = new Rational(db) / (new Rational(da) * new Rational(c));
-                result = new Rational[qCount];
-                for (int i = 0; i < qCount; i++) result[i] = scale.IsOne ? new Rational(qw[i]) : new Rational(qw[i]) * scale;
-                Finish(layout, qe, qCount, n, offset, result, out coeffs, out exps);
-                return true;
+                var p64 = new long[pw.Length];
+                for (int i = 0; i < pw.Length; i++) p64[i] = (long)pw[i];
+                status = ctx.Run<Word64Ops, long, long>(p64, wb, long.MaxValue, Limit(62), mag, out qw, out var qe64);
+                if (status == DivideStatus.Exact) return ctx.Finish(qw!, qe64, scale, out coeffs, out exps);
             }
+            if (status == DivideStatus.TooLarge && qL1Lower <= Limit(126))
+            {
+                status = ctx.Run<Word128Ops, long, Int128>(pw, wb, long.MaxValue, Limit(126), mag, out qw, out var qe128);
+                if (status == DivideStatus.Exact) return ctx.Finish(qw!, qe128, scale, out coeffs, out exps);
+            }
+            if (status == DivideStatus.TooLarge)
+            {
+                var p192 = new Int192[pw.Length];
+                for (int i = 0; i < pw.Length; i++)
+                {
+                    Int128 x = pw[i];
+                    p192[i].Lo = (ulong)x;
+                    p192[i].Mid = (ulong)(x >> 64);
+                    p192[i].Hi = x < 0 ? -1 : 0;
+                }
+                status = ctx.Run<Word192Ops, long, Int192>(p192, wb, long.MaxValue, Limit(190), mag, out qw, out var qe192);
+                if (status == DivideStatus.Exact) return ctx.Finish(qw!, qe192, scale, out coeffs, out exps);
+            }
+            if (status == DivideStatus.NotDivisible) return false;
         }
         CoefficientForm.ToBig(ca, out var ba, out var bda);
         CoefficientForm.ToBig(cb, out var bb, out var bdb);
@@ -366,25 +391,136 @@ internal static class PolynomialDivide
         foreach (var x in bb) bg = BigInteger.GreatestCommonDivisor(bg, x);
         if (bb[0].Sign < 0) bg = -bg;
         if (!bg.IsOne) for (int i = 0; i < bb.Length; i++) bb[i] /= bg;
-        BigInteger[] qb;
-        status = N == 1
-            ? DivideHeap1<BigOps, BigInteger, BigInteger>(pa, ba, pb, bb, layout.GuardMask[0], qMaxPacked[0], BigInteger.Zero, out qe, out qb, out qCount)
-            : DivideHeapN<BigOps, BigInteger, BigInteger>(pa, ba, pb, bb, N, layout.GuardMask, qMaxPacked, BigInteger.Zero, out qe, out qb, out qCount);
-        if (status != DivideStatus.Exact) return false;
-        scale = new Rational(bdb, bda * bg);
-        result = new Rational[qCount];
-        for (int i = 0; i < qCount; i++) result[i] = new Rational(qb[i]) * scale;
-        Finish(layout, qe, qCount, n, offset, result, out coeffs, out exps);
-        return true;
+        var bigStatus = ctx.Run<BigOps, BigInteger, BigInteger>(ba, bb, BigInteger.Zero, double.PositiveInfinity, static _ => 0, out var qb, out var qeb);
+        if (bigStatus != DivideStatus.Exact) return false;
+        var bigScale = new Rational(bdb, bda * bg);
+        var result = new Rational[qb!.Length];
+        for (int i = 0; i < result.Length; i++) result[i] = new Rational(qb[i]) * bigScale;
+        return ctx.Finish(result, qeb, out coeffs, out exps);
     }
 
-    private static void Finish(ExponentLayout layout, ulong[] qe, int qCount, int n, long[] offset, Rational[] result,
-        out Rational[] coeffs, out int[] exps)
+    /// <summary>Shared data of one exact division: packing, index encoding and output conversion.</summary>
+    private sealed class DivisionInput
     {
-        exps = new int[qCount * n];
-        layout.Unpack(qe, qCount, n, offset, exps);
-        coeffs = result;
+        private readonly int[] _ea, _eb, _minA, _minB;
+        private readonly int _n;
+        private readonly long[] _qRange, _offset, _radix;
+        private readonly long _box;
+        private ExponentLayout? _layout;
+        private ulong[]? _pa, _pb, _qMaxPacked;
+        private long[]? _ia, _ib, _stride;
+        private long _window;
+        private bool _dense;
+
+        public DivisionInput(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb, int n,
+            int[] minA, int[] minB, long[] qRange, long[] offset, long[] radix, long box)
+        {
+            _ea = ea.ToArray(); _eb = eb.ToArray(); _n = n; _minA = minA; _minB = minB;
+            _qRange = qRange; _offset = offset; _radix = radix; _box = box;
+            _dense = ForceDense ?? (box <= PolynomialMultiply.DenseMaxBox && box <= DenseBoxPerTerm * ca.Length && cb.Length >= 2);
+            if (_dense)
+            {
+                // Aligned window: product of trailing radices within the buffer budget (16-byte cells).
+                long cells = Math.Max(4, PolynomialMultiply.DenseBufferBytes / 16), suffix = 1;
+                for (int v = n - 1; v >= 0 && suffix * radix[v] <= cells * 2; v--) suffix *= radix[v];
+                if (suffix * 16 < cells && suffix != box && ForceDense != true) _dense = false;
+                _window = suffix;
+                if (box > PolynomialMultiply.DenseMaxBox) _dense = false;
+            }
+        }
+
+        public DivideStatus Run<TOps, TC, TAcc>(TAcc[] p, TC[] d, TC limit, double qSumLimit, Func<TC, double> magnitude,
+            out TC[]? q, out QuotientExponents qe)
+            where TOps : ICoefficientOps<TC, TAcc>
+        {
+            DivideStatus status;
+            int count;
+            if (_dense)
+            {
+                if (_ia is null)
+                {
+                    _stride = new long[_n];
+                    long st = 1;
+                    for (int v = _n - 1; v >= 0; v--) { _stride[v] = st; st *= _radix[v]; }
+                    _ia = Index(_ea, _minA);
+                    _ib = Index(_eb, _minB);
+                }
+                status = DivideDense<TOps, TC, TAcc>(_ia, p, _ib!, d, _window, _radix, _qRange, limit, qSumLimit, magnitude, out var qi, out var qc, out count);
+                q = status == DivideStatus.Exact ? qc[..count] : null;
+                qe = new QuotientExponents(qi, null, count);
+                return status;
+            }
+            if (_layout is null)
+            {
+                var maxValue = new long[_n];
+                for (int v = 0; v < _n; v++) maxValue[v] = _radix[v] - 1;
+                _layout = ExponentLayout.Create(maxValue, guard: true);
+                _pa = new ulong[p.Length * _layout.Words];
+                _pb = new ulong[d.Length * _layout.Words];
+                _layout.Pack(_ea, _n, _minA, _pa);
+                _layout.Pack(_eb, _n, _minB, _pb);
+                var tmp = new int[_n];
+                for (int v = 0; v < _n; v++) tmp[v] = (int)_qRange[v];
+                _qMaxPacked = new ulong[_layout.Words];
+                _layout.Pack(tmp, _n, new int[_n], _qMaxPacked);
+            }
+            ulong[] packed;
+            TC[] qcoef;
+            status = _layout.Words == 1
+                ? DivideHeap1<TOps, TC, TAcc>(_pa, p, _pb, d, _layout.GuardMask[0], _qMaxPacked![0], limit, qSumLimit, magnitude, out packed, out qcoef, out count)
+                : DivideHeapN<TOps, TC, TAcc>(_pa, p, _pb, d, _layout.Words, _layout.GuardMask, _qMaxPacked, limit, qSumLimit, magnitude, out packed, out qcoef, out count);
+            q = status == DivideStatus.Exact ? qcoef[..count] : null;
+            qe = new QuotientExponents(null, packed, count);
+            return status;
+        }
+
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        private long[] Index(int[] e, int[] min)
+        {
+            int terms = e.Length / _n;
+            var idx = new long[terms];
+            for (int t = 0; t < terms; t++)
+            {
+                long x = 0;
+                for (int v = 0; v < _n; v++) x += ((long)e[t * _n + v] - min[v]) * _stride![v];
+                idx[t] = x;
+            }
+            return idx;
+        }
+
+        public bool Finish(long[] q, QuotientExponents qe, Rational scale, out Rational[] coeffs, out int[] exps)
+        {
+            var result = new Rational[q.Length];
+            for (int i = 0; i < q.Length; i++) result[i] = scale.IsOne ? new Rational(q[i]) : new Rational(q[i]) * scale;
+            return Finish(result, qe, out coeffs, out exps);
+        }
+
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        public bool Finish(Rational[] result, QuotientExponents qe, out Rational[] coeffs, out int[] exps)
+        {
+            int count = qe.Count;
+            exps = new int[count * _n];
+            if (qe.Packed is not null) _layout!.Unpack(qe.Packed, count, _n, _offset, exps);
+            else
+            {
+                for (int t = 0; t < count; t++)
+                {
+                    long x = qe.Indices![t];
+                    for (int v = _n - 1; v >= 0; v--)
+                    {
+                        long digit = x % _radix[v];
+                        x /= _radix[v];
+                        exps[t * _n + v] = checked((int)(digit + _offset[v]));
+                    }
+                }
+            }
+            coeffs = result;
+            return true;
+        }
     }
+
+    /// <summary>Quotient exponents as dense indices or packed words.</summary>
+    private readonly record struct QuotientExponents(long[]? Indices, ulong[]? Packed, int Count);
 
     private static bool ShiftedDivides(ReadOnlySpan<int> a, int[] minA, ReadOnlySpan<int> b, int[] minB, long[] qRange)
     {

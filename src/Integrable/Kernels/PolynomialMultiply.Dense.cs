@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using System.Runtime.CompilerServices;
 
 namespace Integrable.Kernels;
@@ -35,13 +36,12 @@ internal static partial class PolynomialMultiply
         CountGroups(ib, L, out var bStart, out var bHigh, out var lb);
         int ga = aHigh.Length, gb = bHigh.Length;
         long minHB = bHigh[gb - 1], maxHB = bHigh[0];
-        var bLookup = new int[checked((int)(maxHB - minHB + 1))];
-        Array.Fill(bLookup, -1);
-        for (int g = 0; g < gb; g++) bLookup[bHigh[g] - minHB] = g;
-        var caArr = ca.ToArray();
-        var cbArr = cb.ToArray();
-
-        var buf = new TAcc[aligned ? L : 2 * L];
+        var lbBytes = Pool.Rent<nint>(nb);
+        for (int j = 0; j < nb; j++) lbBytes[j] = (nint)lb[j] * Unsafe.SizeOf<TAcc>();
+        ref TC caRef = ref MemoryMarshal.GetReference(ca);
+        ref TC cbRef = ref MemoryMarshal.GetReference(cb);
+        int bufLength = aligned ? L : 2 * L;
+        var buf = Pool.RentCleared<TAcc>(bufLength);
         long hMax = aHigh[0] + bHigh[0], hMin = aHigh[ga - 1] + bHigh[gb - 1];
         int count = 0;
         // Touched ranges [lo, hi] of the two halves (empty when lo > hi).
@@ -52,17 +52,22 @@ internal static partial class PolynomialMultiply
             int lowLo = int.MaxValue, lowHi = -1;
             while (gLo < ga && aHigh[gLo] > H - minHB) gLo++;
             while (gHi < ga && aHigh[gHi] >= H - maxHB) gHi++;
-            for (int g = gLo; g < gHi; g++)
+            // Along the A groups of the window, the partner high part H − h_a increases, so the
+            // matching B groups (sorted by decreasing high part) are found by one backward walk.
+            int bg = gHi > gLo ? LastAtLeast(bHigh, H - aHigh[gLo]) : -1;
+            for (int g = gLo; g < gHi && bg >= 0; g++)
             {
-                int bg = bLookup[H - aHigh[g] - minHB];
-                if (bg < 0) continue;
+                long target = H - aHigh[g];
+                while (bg >= 0 && bHigh[bg] < target) bg--;
+                if (bg < 0) break;
+                if (bHigh[bg] != target) continue;
                 int b0 = bStart[bg], b1 = bStart[bg + 1];
                 int a0 = aStart[g], a1 = aStart[g + 1];
                 // Lows are descending inside a group: first + first is the largest cell, last + last the smallest.
                 int top = la[a0] + lb[b0], bottom = la[a1 - 1] + lb[b1 - 1];
                 if (top > lowHi) lowHi = top;
                 if (bottom < lowLo) lowLo = bottom;
-                TOps.MulAddBlock(ref buf[0], ref caArr[a0], ref la[a0], a1 - a0, ref cbArr[b0], ref lb[b0], b1 - b0);
+                TOps.MulAddBlock(ref buf[0], ref Unsafe.Add(ref caRef, a0), ref la[a0], a1 - a0, ref Unsafe.Add(ref cbRef, b0), ref lbBytes[b0], b1 - b0);
             }
             if (aligned)
             {
@@ -81,6 +86,10 @@ internal static partial class PolynomialMultiply
                 upLo = from + L; upHi = to + L;
             }
         }
+        Pool.Return(buf);
+        Pool.Return(la);
+        Pool.Return(lb);
+        Pool.Return(lbBytes);
         return count;
     }
 
@@ -91,7 +100,11 @@ internal static partial class PolynomialMultiply
         for (int k = hi; k >= lo; k--)
         {
             if (TOps.IsZero(in buf[k])) continue;
-            if (count == oc.Length) Grow(ref oi, ref oc, count + 1);
+            if (count == oc.Length || count == oi.Length)
+            {
+                Pool.Grow(ref oi, count, count + 1);
+                Pool.Grow(ref oc, count, count + 1);
+            }
             oi[count] = baseIndex + k;
             oc[count] = buf[k];
             count++;
@@ -99,11 +112,23 @@ internal static partial class PolynomialMultiply
         }
     }
 
+    /// <summary>Largest index g with high[g] ≥ <paramref name="target"/> in a descending array, or −1.</summary>
+    private static int LastAtLeast(long[] high, long target)
+    {
+        int lo = 0, hi = high.Length - 1, best = -1;
+        while (lo <= hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (high[mid] >= target) { best = mid; lo = mid + 1; } else hi = mid - 1;
+        }
+        return best;
+    }
+
     private static void CountGroups(ReadOnlySpan<long> idx, int window, out int[] start, out long[] high, out int[] low)
     {
         int n = idx.Length, groups = 0;
-        low = new int[n];
-        var hs = new long[n];
+        low = Pool.Rent<int>(n);
+        var hs = Pool.Rent<long>(n);
         long prev = long.MinValue;
         for (int i = 0; i < n; i++)
         {
@@ -121,5 +146,6 @@ internal static partial class PolynomialMultiply
             if (hs[i] != prev) { g++; start[g] = i; high[g] = hs[i]; prev = hs[i]; }
         }
         start[groups] = n;
+        Pool.Return(hs);
     }
 }

@@ -1,9 +1,17 @@
+using System.Runtime.InteropServices;
 using System.Runtime.CompilerServices;
 
 namespace Integrable.Kernels;
 
 internal static partial class PolynomialMultiply
 {
+    /// <summary>One heap slot: a packed exponent and the head of the chain of rows sharing it.</summary>
+    private struct HeapEntry
+    {
+        public ulong Exp;
+        public int Head;
+    }
+
     /// <summary>Johnson's heap multiplication on single-word packed exponents, with chaining of equal
     /// exponents in the heap and delayed insertion of (i, j) until (i−1, j) has been consumed
     /// (Monagan and Pearce, "Parallel sparse polynomial multiplication using heaps", ISSAC 2009).</summary>
@@ -18,72 +26,73 @@ internal static partial class PolynomialMultiply
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int n = ea.Length, m = eb.Length;
-        var hexp = new ulong[n + 1];
-        var hhead = new int[n + 1];
-        var nj = new int[n];
-        var next = new int[n];
-        var hind = new int[n];
-        var store = new int[2 * n];
-        for (int i = 1; i < n; i++) hind[i] = 1;
+        var heapArr = new HeapEntry[n + 1];
+        var njArr = new int[n];
+        var nextArr = new int[n];
+        var hindArr = new int[n];
+        var storeArr = new int[2 * n];
+        ref HeapEntry heap = ref MemoryMarshal.GetArrayDataReference(heapArr);
+        ref int nj = ref MemoryMarshal.GetArrayDataReference(njArr);
+        ref int next = ref MemoryMarshal.GetArrayDataReference(nextArr);
+        ref int hind = ref MemoryMarshal.GetArrayDataReference(hindArr);
+        ref int store = ref MemoryMarshal.GetArrayDataReference(storeArr);
+        ref ulong pa = ref MemoryMarshal.GetReference(ea);
+        ref ulong pb = ref MemoryMarshal.GetReference(eb);
+        ref TC qa = ref MemoryMarshal.GetReference(ca);
+        ref TC qb = ref MemoryMarshal.GetReference(cb);
+        for (int i = 1; i < n; i++) Unsafe.Add(ref hind, i) = 1;
 
         // hind[i] = 2·(next column to insert for row i) + (1 if row i is not in the heap).
-        int hlen = 1, nextLoc = int.MaxValue, count = 0;
-        nj[0] = 0; next[0] = -1;
-        hexp[1] = ea[0] + eb[0]; hhead[1] = 0; hlen = 2;
-        hind[0] = 2;
+        int hlen = 2, nextLoc = int.MaxValue, count = 0;
+        Unsafe.Add(ref heap, 1).Exp = pa + pb;
+        Unsafe.Add(ref heap, 1).Head = 0;
+        next = -1;
+        nj = 0;
+        hind = 2;
 
         while (hlen > 1)
         {
-            ulong exp = hexp[1];
+            ulong exp = Unsafe.Add(ref heap, 1).Exp;
             TOps.Set(out TAcc acc, default!);
             int sp = 0;
             do
             {
-                int r = hhead[1];
-                // pop the root
+                int r = Unsafe.Add(ref heap, 1).Head;
                 hlen--;
-                if (hlen > 1)
+                if (hlen > 1) PopRoot(ref heap, hlen);
+                do
                 {
-                    ulong le = hexp[hlen]; int lh = hhead[hlen];
-                    int hole = 1, c = 2;
-                    while (c < hlen)
-                    {
-                        if (c + 1 < hlen && hexp[c + 1] > hexp[c]) c++;
-                        if (hexp[c] <= le) break;
-                        hexp[hole] = hexp[c]; hhead[hole] = hhead[c];
-                        hole = c; c = 2 * c;
-                    }
-                    hexp[hole] = le; hhead[hole] = lh;
-                }
-                for (; r >= 0; r = next[r])
-                {
-                    int j = nj[r];
-                    hind[r] |= 1;
-                    store[sp++] = r; store[sp++] = j;
-                    TOps.MulAdd(ref acc, ca[r], cb[j]);
-                }
-            } while (hlen > 1 && hexp[1] == exp);
+                    int j = Unsafe.Add(ref nj, r);
+                    Unsafe.Add(ref hind, r) |= 1;
+                    Unsafe.Add(ref store, sp) = r;
+                    Unsafe.Add(ref store, sp + 1) = j;
+                    sp += 2;
+                    TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
+                    r = Unsafe.Add(ref next, r);
+                } while (r >= 0);
+            } while (hlen > 1 && Unsafe.Add(ref heap, 1).Exp == exp);
 
             while (sp > 0)
             {
-                int j = store[--sp], i = store[--sp];
-                if (i + 1 < n && hind[i + 1] == 2 * j + 1)
+                sp -= 2;
+                int i = Unsafe.Add(ref store, sp), j = Unsafe.Add(ref store, sp + 1);
+                if (i + 1 < n && Unsafe.Add(ref hind, i + 1) == 2 * j + 1)
                 {
-                    nj[i + 1] = j;
-                    Insert1(hexp, hhead, next, ref hlen, ref nextLoc, i + 1, ea[i + 1] + eb[j]);
-                    hind[i + 1] = 2 * (j + 1);
+                    Unsafe.Add(ref nj, i + 1) = j;
+                    Insert1(ref heap, ref next, ref hlen, ref nextLoc, i + 1, Unsafe.Add(ref pa, i + 1) + Unsafe.Add(ref pb, j));
+                    Unsafe.Add(ref hind, i + 1) = 2 * (j + 1);
                 }
-                if (j + 1 < m && (hind[i] & 1) == 1 && (i == 0 || hind[i - 1] >= 2 * (j + 2) + 1))
+                if (j + 1 < m && (Unsafe.Add(ref hind, i) & 1) == 1 && (i == 0 || Unsafe.Add(ref hind, i - 1) >= 2 * (j + 2) + 1))
                 {
-                    nj[i] = j + 1;
-                    Insert1(hexp, hhead, next, ref hlen, ref nextLoc, i, ea[i] + eb[j + 1]);
-                    hind[i] = 2 * (j + 2);
+                    Unsafe.Add(ref nj, i) = j + 1;
+                    Insert1(ref heap, ref next, ref hlen, ref nextLoc, i, Unsafe.Add(ref pa, i) + Unsafe.Add(ref pb, j + 1));
+                    Unsafe.Add(ref hind, i) = 2 * (j + 2);
                 }
             }
 
             if (!TOps.IsZero(in acc))
             {
-                if (count == oe.Length) Grow(ref oe, ref oc, count + 1);
+                if (count == oc.Length || count == oe.Length) Grow(ref oe, ref oc, count);
                 oe[count] = exp;
                 oc[count] = acc;
                 count++;
@@ -92,31 +101,63 @@ internal static partial class PolynomialMultiply
         return count;
     }
 
-    /// <summary>Inserts row <paramref name="row"/> with exponent <paramref name="e"/>, chaining it to
-    /// an existing node with the same exponent when one is found on the way to the root.</summary>
+    /// <summary>Removes the root of a heap whose last entry is at <paramref name="last"/>: the hole
+    /// moves down to a leaf along the larger children (one comparison per level), then the last
+    /// entry is sifted up from there; it is usually small, so that second phase is short.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void Insert1(ulong[] hexp, int[] hhead, int[] next, ref int hlen, ref int nextLoc, int row, ulong e)
+    private static void PopRoot(ref HeapEntry heap, int last)
     {
-        if (hlen > 1 && hexp[1] == e) { next[row] = hhead[1]; hhead[1] = row; return; }
-        if (nextLoc < hlen && hexp[nextLoc] == e) { next[row] = hhead[nextLoc]; hhead[nextLoc] = row; return; }
+        HeapEntry x = Unsafe.Add(ref heap, last);
+        int hole = 1, c = 2;
+        while (c < last)
+        {
+            if (c + 1 < last && Unsafe.Add(ref heap, c + 1).Exp > Unsafe.Add(ref heap, c).Exp) c++;
+            Unsafe.Add(ref heap, hole) = Unsafe.Add(ref heap, c);
+            hole = c;
+            c <<= 1;
+        }
+        while (hole > 1)
+        {
+            int p = hole >> 1;
+            if (Unsafe.Add(ref heap, p).Exp >= x.Exp) break;
+            Unsafe.Add(ref heap, hole) = Unsafe.Add(ref heap, p);
+            hole = p;
+        }
+        Unsafe.Add(ref heap, hole) = x;
+    }
+
+    /// <summary>Inserts row <paramref name="row"/> with exponent <paramref name="e"/>, chaining it to
+    /// an existing entry with the same exponent when one is found on the way to the root.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Insert1(ref HeapEntry heap, ref int next, ref int hlen, ref int nextLoc, int row, ulong e)
+    {
+        ref HeapEntry top = ref Unsafe.Add(ref heap, 1);
+        if (hlen > 1 && top.Exp == e) { Unsafe.Add(ref next, row) = top.Head; top.Head = row; return; }
+        if (nextLoc < hlen)
+        {
+            ref HeapEntry nl = ref Unsafe.Add(ref heap, nextLoc);
+            if (nl.Exp == e) { Unsafe.Add(ref next, row) = nl.Head; nl.Head = row; return; }
+        }
         int pos = hlen, j = pos;
         while (j > 1)
         {
             int p = j >> 1;
-            ulong pe = hexp[p];
-            if (pe == e) { next[row] = hhead[p]; hhead[p] = row; nextLoc = p; return; }
-            if (pe < e) j = p; else break;
+            ref HeapEntry pe = ref Unsafe.Add(ref heap, p);
+            if (pe.Exp == e) { Unsafe.Add(ref next, row) = pe.Head; pe.Head = row; nextLoc = p; return; }
+            if (pe.Exp < e) j = p; else break;
         }
         hlen++;
         int k = pos;
         while (k > j)
         {
             int p = k >> 1;
-            hexp[k] = hexp[p]; hhead[k] = hhead[p];
+            Unsafe.Add(ref heap, k) = Unsafe.Add(ref heap, p);
             k = p;
         }
-        hexp[j] = e; hhead[j] = row;
-        next[row] = -1;
+        ref HeapEntry slot = ref Unsafe.Add(ref heap, j);
+        slot.Exp = e;
+        slot.Head = row;
+        Unsafe.Add(ref next, row) = -1;
     }
 
     /// <summary>Johnson's heap multiplication on multi-word packed exponents (<paramref name="words"/>
@@ -244,17 +285,16 @@ internal static partial class PolynomialMultiply
         for (int w = 0; w < r.Length; w++) r[w] = a[w] + b[w];
     }
 
-    private static void Grow<TE, TAcc>(ref TE[] oe, ref TAcc[] oc, int needed)
+    private static void Grow<TE, TAcc>(ref TE[] oe, ref TAcc[] oc, int count)
     {
-        int size = Math.Max(needed, Math.Max(16, oc.Length * 2));
-        Array.Resize(ref oe, size);
-        Array.Resize(ref oc, size);
+        Pool.Grow(ref oe, count, count + 1);
+        Pool.Grow(ref oc, count, count + 1);
     }
 
     private static void GrowN<TAcc>(ref ulong[] oe, ref TAcc[] oc, int needed, int words)
     {
-        int size = Math.Max(needed, Math.Max(16, oc.Length * 2));
-        Array.Resize(ref oe, size * words);
-        Array.Resize(ref oc, size);
+        int count = needed - 1;
+        Pool.Grow(ref oe, count * words, needed * words);
+        Pool.Grow(ref oc, count, needed);
     }
 }

@@ -7,25 +7,32 @@ namespace Integrable.Kernels;
 /// <summary>Multiplication of sparse Laurent polynomials given as flat arrays: coefficients and
 /// term-major exponent vectors sorted in descending lex order.</summary>
 /// <remarks>
-/// <para>Dispatch (<see cref="Multiply"/>): exponents are shifted by the per-variable minima of each
-/// operand, which makes them non-negative and preserves the order. Coefficients are put over a
-/// common denominator; when the integers fit in words, products accumulate in a 64-, 128- or
-/// 192-bit accumulator chosen from the bound min(‖A‖₁·max|B|, max|A|·‖B‖₁) on every partial sum of
-/// a product coefficient (so no overflow check is needed in the loop), otherwise in big integers. Then:</para>
+/// <para>Dispatch (<see cref="Multiply"/>; zero, constant and monomial operands are handled by the
+/// caller): exponents are shifted by the per-variable minima of each operand, which makes them
+/// non-negative and preserves the order. Coefficients are put over a common denominator; when the
+/// integers fit in words, products accumulate in the narrowest accumulator that the bound
+/// min(‖A‖₁·max|B|, max|A|·‖B‖₁) on every partial sum of a product coefficient allows
+/// (<see cref="SelectAccumulator"/>: 64-bit; for non-negative inputs a carry-free split 96-bit or
+/// unsigned 128-bit; signed 128-bit; 192-bit), so the inner loops never test for overflow; otherwise
+/// big integers. Then:</para>
 /// <list type="bullet">
 /// <item>Dense (<see cref="MultiplyDense"/>) when both operands have at least
 /// <see cref="DenseMinTerms"/> terms and the product's degree box (Π over variables of the summed
 /// exponent ranges + 1) holds at most <see cref="DenseBoxPerProduct"/> cells per term product
-/// #a·#b and at most <see cref="DenseMaxBox"/> cells. The dense method costs about one
-/// multiply-add per term product plus a cheap scan of each box cell that may be hit, while the heap
-/// costs a heap operation (tens of nanoseconds) per product, so dense wins as long as the box is
-/// not much larger than the number of products; for (1+x+y+z+t)^20·((1+x+y+z+t)^20+1) the box has
-/// 2.8·10⁶ cells for 1.1·10⁸ products.</item>
+/// #a·#b and at most <see cref="DenseMaxBox"/> cells. Reason: the dense method costs about one
+/// multiply-add (a few cycles) per term product plus the scan of the touched part of each window,
+/// while the heap costs a heap operation (tens of nanoseconds) per product; so dense wins unless
+/// the box is much larger than the number of products. For (1+x+y+z+t)^20·((1+x+y+z+t)^20+1) the
+/// box has 2.8·10⁶ cells for 1.1·10⁸ products; for the sparse product
+/// (1+x+y+2z²+3t³+5u⁵)^8·(1+u+t+2z²+3y³+5x⁵)^8 it has 8.6·10⁷ cells for 1.7·10⁶ products and the
+/// heap is chosen. Windows are aligned to the trailing variables when such a slice fits in
+/// <see cref="DenseBufferBytes"/> (see <see cref="DenseWindow"/>).</item>
 /// <item>Otherwise Johnson's heap method (<see cref="MultiplyHeap1"/> on one packed word when the
 /// summed exponent ranges fit in 64 bits, <see cref="MultiplyHeapN"/> on several words), whose
 /// memory and time follow the number of terms whatever the degrees.</item>
 /// </list>
-/// <para>Thresholds are <c>internal static</c> so tests can force each path.</para>
+/// <para>Thresholds are <c>internal static</c>; <see cref="Force"/> and
+/// <see cref="ForceDenseShift"/> let tests and benchmarks pin each path on their thread.</para>
 /// </remarks>
 internal static partial class PolynomialMultiply
 {
@@ -46,12 +53,13 @@ internal static partial class PolynomialMultiply
     /// <summary>Dense is chosen only when both operands have at least this many terms.</summary>
     internal static int DenseMinTerms = 16;
 
-    /// <summary>Size in bytes of the dense method's accumulator buffer (two windows); it should fit
-    /// in the first-level data cache.</summary>
+    /// <summary>Size in bytes of the dense method's accumulator buffer; it should fit in the
+    /// first-level data cache (48 KiB per core on the reference machine).</summary>
     internal static int DenseBufferBytes = 32 * 1024;
 
     /// <summary>Multiplies A by B (both non-empty, canonical, <paramref name="nvars"/> variables).</summary>
     /// <exception cref="OverflowException">A product exponent does not fit in 32 bits.</exception>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void Multiply(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
         int nvars, out Rational[] coeffs, out int[] exps)
     {
@@ -97,6 +105,7 @@ internal static partial class PolynomialMultiply
         return MultiplyAlgorithm.Heap;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Run<TOps, TC, TAcc>(TC[] ca, ReadOnlySpan<int> ea, TC[] cb, ReadOnlySpan<int> eb,
         in ProductShape s, BigInteger den, out Rational[] coeffs, out int[] exps)
         where TOps : ICoefficientOps<TC, TAcc>
@@ -107,18 +116,23 @@ internal static partial class PolynomialMultiply
         int count;
         TAcc[] acc;
         var algorithm = Choose(in s);
-        // Dense needs a window lookup table of Box / 2^shift entries: above DenseMaxBox use the heap even when forced.
+        int estimate = Math.Max(ca.Length, cb.Length) * 2;
+        // Dense needs per-window scratch proportional to Box / window: above DenseMaxBox use the heap even when forced.
         if (algorithm == MultiplyAlgorithm.Dense && s.Box <= DenseMaxBox)
         {
             var stride = new long[n];
             long st = 1;
             for (int v = n - 1; v >= 0; v--) { stride[v] = st; st *= s.Radix[v]; }
-            var ia = Index(ea, n, s.MinA, stride);
-            var ib = Index(eb, n, s.MinB, stride);
+            var ia = Pool.Rent<long>(ca.Length);
+            var ib = Pool.Rent<long>(cb.Length);
+            Index(ea, n, s.MinA, stride, ia);
+            Index(eb, n, s.MinB, stride, ib);
             DenseWindow(in s, Unsafe.SizeOf<TAcc>(), out long window, out bool aligned);
-            var oi = new long[Math.Max(ca.Length, cb.Length)];
-            acc = new TAcc[oi.Length];
-            count = MultiplyDense<TOps, TC, TAcc>(ia, ca, ib, cb, window, aligned, ref oi, ref acc);
+            var oi = Pool.Rent<long>(estimate);
+            acc = Pool.Rent<TAcc>(estimate);
+            count = MultiplyDense<TOps, TC, TAcc>(ia.AsSpan(0, ca.Length), ca, ib.AsSpan(0, cb.Length), cb, window, aligned, ref oi, ref acc);
+            Pool.Return(ia);
+            Pool.Return(ib);
             exps = new int[count * n];
             for (int t = 0; t < count; t++)
             {
@@ -130,6 +144,7 @@ internal static partial class PolynomialMultiply
                     exps[t * n + v] = (int)(digit + offset[v]);
                 }
             }
+            Pool.Return(oi);
         }
         else
         {
@@ -137,24 +152,48 @@ internal static partial class PolynomialMultiply
             for (int v = 0; v < n; v++) maxValue[v] = s.Radix[v] - 1;
             var layout = ExponentLayout.Create(maxValue, guard: false);
             int N = layout.Words;
-            var pa = new ulong[ca.Length * N];
-            var pb = new ulong[cb.Length * N];
+            var pa = Pool.Rent<ulong>(ca.Length * N);
+            var pb = Pool.Rent<ulong>(cb.Length * N);
             layout.Pack(ea, n, s.MinA, pa);
             layout.Pack(eb, n, s.MinB, pb);
+            var ra = pa.AsSpan(0, ca.Length * N);
+            var rb = pb.AsSpan(0, cb.Length * N);
             bool swap = cb.Length < ca.Length;
-            var oe = new ulong[Math.Max(ca.Length, cb.Length) * N];
-            acc = new TAcc[Math.Max(ca.Length, cb.Length)];
+            var oe = Pool.Rent<ulong>(estimate * N);
+            acc = Pool.Rent<TAcc>(estimate);
             if (N == 1)
-                count = swap ? MultiplyHeap1<TOps, TC, TAcc>(pb, cb, pa, ca, ref oe, ref acc)
-                             : MultiplyHeap1<TOps, TC, TAcc>(pa, ca, pb, cb, ref oe, ref acc);
+                count = swap ? MultiplyHeap1<TOps, TC, TAcc>(rb, cb, ra, ca, ref oe, ref acc)
+                             : MultiplyHeap1<TOps, TC, TAcc>(ra, ca, rb, cb, ref oe, ref acc);
             else
-                count = swap ? MultiplyHeapN<TOps, TC, TAcc>(pb, cb, pa, ca, N, ref oe, ref acc)
-                             : MultiplyHeapN<TOps, TC, TAcc>(pa, ca, pb, cb, N, ref oe, ref acc);
+                count = swap ? MultiplyHeapN<TOps, TC, TAcc>(rb, cb, ra, ca, N, ref oe, ref acc)
+                             : MultiplyHeapN<TOps, TC, TAcc>(ra, ca, rb, cb, N, ref oe, ref acc);
+            Pool.Return(pa);
+            Pool.Return(pb);
             exps = new int[count * n];
             layout.Unpack(oe, count, n, offset, exps);
+            Pool.Return(oe);
         }
         coeffs = new Rational[count];
         for (int t = 0; t < count; t++) coeffs[t] = TOps.ToRational(in acc[t], in den);
+        Pool.Return(acc);
+    }
+
+    private static bool NonNegative(long[] w)
+    {
+        foreach (var x in w) if (x < 0) return false;
+        return true;
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride, long[] idx)
+    {
+        int terms = e.Length / n;
+        for (int t = 0; t < terms; t++)
+        {
+            long x = 0;
+            for (int v = 0; v < n; v++) x += ((long)e[t * n + v] - min[v]) * stride[v];
+            idx[t] = x;
+        }
     }
 
     /// <summary>Window of the dense method. Preferred: the product of the radices of the trailing
@@ -171,93 +210,5 @@ internal static partial class PolynomialMultiply
         window = 2;
         while (window * 4 <= cells && window * 2 <= s.Box) window *= 2;
         aligned = false;
-    }
-
-    private static bool NonNegative(long[] w)
-    {
-        foreach (var x in w) if (x < 0) return false;
-        return true;
-    }
-
-    private static long[] Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride)
-    {
-        int terms = e.Length / n;
-        var idx = new long[terms];
-        for (int t = 0; t < terms; t++)
-        {
-            long x = 0;
-            for (int v = 0; v < n; v++) x += ((long)e[t * n + v] - min[v]) * stride[v];
-            idx[t] = x;
-        }
-        return idx;
-    }
-}
-
-/// <summary>Multiplication algorithms.</summary>
-internal enum MultiplyAlgorithm
-{
-    /// <summary>Let the dispatcher choose.</summary>
-    Auto,
-    /// <summary>Johnson's heap method.</summary>
-    Heap,
-    /// <summary>Dense array (Kronecker) method.</summary>
-    Dense,
-}
-
-/// <summary>Accumulators of the word-coefficient paths (see <see cref="PolynomialMultiply.SelectAccumulator"/>).</summary>
-internal enum Accumulator
-{
-    /// <summary>Signed 64-bit.</summary>
-    Word64,
-    /// <summary>Carry-free split sums of non-negative products below 2^96.</summary>
-    Split96,
-    /// <summary>Unsigned 128-bit for non-negative products.</summary>
-    Unsigned128,
-    /// <summary>Signed 128-bit.</summary>
-    Word128,
-    /// <summary>Signed 192-bit.</summary>
-    Word192,
-}
-
-/// <summary>Exponent ranges of two operands and the degree box of their product.</summary>
-internal readonly struct ProductShape
-{
-    public readonly int Nvars, CountA, CountB;
-    public readonly int[] MinA, MinB;
-    public readonly long[] Radix;
-    /// <summary>Number of cells of the product's degree box (saturates at long.MaxValue).</summary>
-    public readonly long Box;
-
-    public ProductShape(ReadOnlySpan<int> ea, ReadOnlySpan<int> eb, int countA, int countB, int nvars)
-    {
-        Nvars = nvars; CountA = countA; CountB = countB;
-        MinMax(ea, nvars, out MinA, out var maxA);
-        MinMax(eb, nvars, out MinB, out var maxB);
-        Radix = new long[nvars];
-        long box = 1;
-        for (int v = 0; v < nvars; v++)
-        {
-            long lo = (long)MinA[v] + MinB[v], hi = (long)maxA[v] + maxB[v];
-            if (lo < int.MinValue || hi > int.MaxValue)
-                throw new OverflowException($"Product exponent of variable #{v} leaves the 32-bit range.");
-            Radix[v] = hi - lo + 1;
-            box = box > long.MaxValue / Radix[v] ? long.MaxValue : box * Radix[v];
-        }
-        Box = box;
-    }
-
-    internal static void MinMax(ReadOnlySpan<int> e, int n, out int[] min, out int[] max)
-    {
-        min = new int[n];
-        max = new int[n];
-        min.AsSpan().Fill(int.MaxValue);
-        max.AsSpan().Fill(int.MinValue);
-        for (int t = 0; t < e.Length; t += n)
-            for (int v = 0; v < n; v++)
-            {
-                int x = e[t + v];
-                if (x < min[v]) min[v] = x;
-                if (x > max[v]) max[v] = x;
-            }
     }
 }

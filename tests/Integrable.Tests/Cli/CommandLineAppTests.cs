@@ -17,7 +17,8 @@ public class CommandLineAppTests
     {
         var (exit, stdout, _) = Run();
         Assert.Equal(0, exit);
-        Assert.Contains("all values integers: yes", stdout);
+        Assert.Contains("all integers: yes", stdout);
+        Assert.Contains("give the orbit of step 1: yes", stdout);
     }
 
     [Theory]

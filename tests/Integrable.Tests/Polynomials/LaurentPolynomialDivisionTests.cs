@@ -1,4 +1,5 @@
 using System.Numerics;
+using Integrable.Kernels;
 using Integrable.Numbers;
 using Integrable.Polynomials;
 
@@ -7,6 +8,66 @@ namespace Integrable.Tests.Polynomials;
 public sealed class LaurentPolynomialDivisionTests
 {
     private static readonly LaurentPolynomialRing R = new("x", "y", "z");
+
+    private static T WithDivision<T>(bool? dense, Func<T> f)
+    {
+        var old = PolynomialDivide.ForceDense;
+        PolynomialDivide.ForceDense = dense;
+        try { return f(); }
+        finally { PolynomialDivide.ForceDense = old; }
+    }
+
+    public static TheoryData<string> Algorithms => new() { "dense", "heap", "auto" };
+
+    private static bool? Parse(string s) => s == "dense" ? true : s == "heap" ? false : null;
+
+    [Theory]
+    [MemberData(nameof(Algorithms))]
+    public void TryDivideExact_EachAlgorithm_RecoversFactorOrFails(string algorithm)
+    {
+        var ring = new LaurentPolynomialRing("x", "y", "z");
+        var rng = new Random(111);
+        for (int i = 0; i < 150; i++)
+        {
+            var shape = new PolynomialTestData.Shape(MaxTerms: 15, MinExp: -4, MaxExp: 4, CoefficientKind: i % 3 == 0 ? i % 9 : -1);
+            var q = PolynomialTestData.Random(rng, ring, shape);
+            var d = PolynomialTestData.Random(rng, ring, shape with { MaxTerms = 6 });
+            if (d.IsZero || d.IsMonomial) continue;
+            var p = q * d;
+            Assert.True(WithDivision(Parse(algorithm), () => p.TryDivideExact(d, out var got) && got == q), $"{algorithm} iteration {i}: ({p}) / ({d})");
+            var r = PolynomialTestData.Random(rng, ring, new(MaxTerms: 2));
+            var p2 = p + r;
+            bool ok = WithDivision(Parse(algorithm), () => p2.TryDivideExact(d, out var got2) ? got2 * d == p2 : true);
+            Assert.True(ok, $"{algorithm} iteration {i}: a claimed quotient must be exact");
+            Assert.Equal(p2.TryDivideExact(d, out _), WithDivision(Parse(algorithm), () => p2.TryDivideExact(d, out _)));
+            // Unrelated operands: any claimed quotient must be exact, and the algorithms agree.
+            var u = PolynomialTestData.Random(rng, ring, shape);
+            bool auto = u.TryDivideExact(d, out var qa);
+            bool forced = WithDivision(Parse(algorithm), () => u.TryDivideExact(d, out var qf) && qf * d == u);
+            Assert.Equal(auto, forced);
+            if (auto) Assert.Equal(u, qa * d);
+        }
+    }
+
+    [Theory]
+    [MemberData(nameof(Algorithms))]
+    public void TryDivideExact_AccumulatorEscalation_IsExact(string algorithm)
+    {
+        // Quotients whose coefficient sums exceed the 64-bit and then the 128-bit bounds, with a
+        // dividend whose coefficients still fit in 128 bits, force the retries with wider accumulators.
+        var ring = new LaurentPolynomialRing("x", "y");
+        var x = ring.Variable(0);
+        var y = ring.Variable(1);
+        foreach (int bits in new[] { 20, 40, 60 })
+        {
+            var c = new Rational(BigInteger.Pow(2, bits) + 1);
+            var q = (c * x + c * y + 1).Pow(3) * (x - y + 2);
+            var d = (x + 3) * (y - 5) * (c * x * y + 1);
+            var p = q * d;
+            Assert.True(WithDivision(Parse(algorithm), () => p.TryDivideExact(d, out var got) && got == q), $"{algorithm} bits {bits}");
+            Assert.False(WithDivision(Parse(algorithm), () => (p + x).TryDivideExact(d, out _)), $"{algorithm} bits {bits} non-divisor");
+        }
+    }
 
     [Fact]
     public void TryDivideExact_RandomProducts_RecoversFactor()
@@ -117,6 +178,22 @@ public sealed class LaurentPolynomialDivisionTests
         Assert.True(somos.TryDivideExact(x * z + y * y, out var h));
         Assert.Equal(x.Pow(-1) * z.Pow(-2), h);
         Assert.True(R.Zero.TryDivideExact(d, out var zq) && zq.IsZero);
+    }
+
+    [Theory]
+    [MemberData(nameof(Algorithms))]
+    public void TryDivideExact_DividendWithFewerTermsThanDivisor_Succeeds(string algorithm)
+    {
+        // x³ + 1 = (x + 1)(x² − x + 1) and x^n − 1 = (x − 1)(x^(n−1) + … + 1): dividends can be
+        // much shorter than divisors (worked by hand).
+        var x = R.Variable(0);
+        var y = R.Variable(1);
+        Assert.True(WithDivision(Parse(algorithm), () => (x.Pow(3) + 1).TryDivideExact(x * x - x + 1, out var q) && q == x + 1));
+        var geometric = R.Zero;
+        for (int k = 0; k < 40; k++) geometric += x.Pow(k) * y.Pow(-k);
+        var p = x.Pow(40) * y.Pow(-40) - 1;
+        Assert.True(WithDivision(Parse(algorithm), () => p.TryDivideExact(geometric, out var q2) && q2 == x * y.Pow(-1) - 1));
+        Assert.True(WithDivision(Parse(algorithm), () => p.TryDivideExact(x * y.Pow(-1) - 1, out var q3) && q3 == geometric));
     }
 
     [Fact]

@@ -25,6 +25,11 @@ internal static class GcdHooks
     /// <summary>Calls of the modular recursion (all levels), for cost diagnostics.</summary>
     [ThreadStatic] internal static long ImageCount;
 
+    /// <summary>Time spent per phase (Stopwatch ticks): 0 bounds, 1 reduce, 2 modular images, 3 remaindering, 4 verification.</summary>
+    [ThreadStatic] internal static long[]? PhaseTicksStore;
+
+    internal static long[] PhaseTicks => PhaseTicksStore ??= new long[5];
+
     /// <summary>Number of primes used by the last integer gcd.</summary>
     [ThreadStatic] internal static int PrimesUsed;
 
@@ -38,6 +43,7 @@ internal static class GcdHooks
         ForcedPoints = null;
         UnluckyPrimes = UnluckyPoints = Restarts = FailedVerifications = PrimesUsed = 0;
         ImageCount = 0;
+        PhaseTicksStore = null;
         ForceAlgorithm = null;
     }
 }

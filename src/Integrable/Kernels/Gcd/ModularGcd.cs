@@ -42,7 +42,9 @@ internal static class ModularGcd
         var degA = A.Degrees();
         var degB = B.Degrees();
         var rng = new GcdRandom(0x5DEECE66DUL + (ulong)depth);
+        long t0 = System.Diagnostics.Stopwatch.GetTimestamp();
         var u = DegreeBounds(A, B, degA, degB, rng);
+        GcdHooks.PhaseTicks[0] += System.Diagnostics.Stopwatch.GetTimestamp() - t0;
         bool allZero = true;
         for (int v = 0; v < n; v++) if (u[v] != 0) allZero = false;
         if (allZero) return new IntGcd(IntPoly.One(n), A, B);
@@ -138,7 +140,13 @@ internal static class ModularGcd
             ulong p = NextPrime(ref primeIndex);
             var f = new ModP(p);
             if (f.FromInteger(A.Coeffs[0]) == 0 || f.FromInteger(B.Coeffs[0]) == 0) continue;
-            var img = new BrownModP(f, cofactors, p).Gcd(A.Reduce(f), B.Reduce(f));
+            long t1 = System.Diagnostics.Stopwatch.GetTimestamp();
+            var ar = A.Reduce(f); var br = B.Reduce(f);
+            long t2 = System.Diagnostics.Stopwatch.GetTimestamp();
+            var img = new BrownModP(f, cofactors, p).Gcd(ar, br);
+            long t3 = System.Diagnostics.Stopwatch.GetTimestamp();
+            GcdHooks.PhaseTicks[1] += t2 - t1;
+            GcdHooks.PhaseTicks[2] += t3 - t2;
             GcdHooks.PrimesUsed++;
             if (img is null)
             {
@@ -171,9 +179,12 @@ internal static class ModularGcd
                 attempt = m > lh + accA!.Log2MaxAbs() + Math.Log2(accA.Count + 1) && m > log2A
                        && m > lh + accB!.Log2MaxAbs() + Math.Log2(accB.Count + 1) && m > log2B;
             }
+            GcdHooks.PhaseTicks[3] += System.Diagnostics.Stopwatch.GetTimestamp() - t3;
             if (attempt)
             {
+                long t4 = System.Diagnostics.Stopwatch.GetTimestamp();
                 var result = cofactors ? VerifyCofactors(A, B, gamma, accH, accA!, accB!) : VerifyByDivision(A, B, accH);
+                GcdHooks.PhaseTicks[4] += System.Diagnostics.Stopwatch.GetTimestamp() - t4;
                 if (result is { } ok) return ok;
                 GcdHooks.FailedVerifications++;
             }

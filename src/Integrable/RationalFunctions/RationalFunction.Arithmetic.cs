@@ -31,18 +31,18 @@ public sealed partial class RationalFunction
             var (_, s1, b1) = s.GcdWithCofactors(b, MonomialFactor.Keep);
             return new RationalFunction(field, s1, b1);
         }
-        if (b.IsOne) return new RationalFunction(field, a * d + c, d);   // gcd(a·d + c, d) = gcd(c, d) = 1
-        if (d.IsOne) return new RationalFunction(field, a + c * b, b);
+        if (b.IsOne) return new RationalFunction(field, Mul(a, d) + c, d);   // gcd(a·d + c, d) = gcd(c, d) = 1
+        if (d.IsOne) return new RationalFunction(field, a + Mul(c, b), b);
         var (g, b1x, d1x) = b.GcdWithCofactors(d, MonomialFactor.Keep);
         if (g.IsOne)
         {
-            var num = a * d + c * b;
-            return num.IsZero ? field.Zero : new RationalFunction(field, num, b * d);
+            var num = Mul(a, d) + Mul(c, b);
+            return num.IsZero ? field.Zero : new RationalFunction(field, num, Mul(b, d));
         }
-        var t = a * d1x + c * b1x;
+        var t = Mul(a, d1x) + Mul(c, b1x);
         if (t.IsZero) return field.Zero;
         var (_, t1, g1) = t.GcdWithCofactors(g, MonomialFactor.Keep);
-        return new RationalFunction(field, t1, b1x * d1x * g1);
+        return new RationalFunction(field, t1, Mul(Mul(b1x, d1x), g1));
     }
 
     /// <summary>Difference.</summary>
@@ -89,7 +89,7 @@ public sealed partial class RationalFunction
             c = c1;
             b = b1;
         }
-        return new RationalFunction(field, a * c, b * d);
+        return new RationalFunction(field, Mul(a, c), Mul(b, d));
     }
 
     /// <summary>Quotient.</summary>
@@ -216,6 +216,8 @@ public sealed partial class RationalFunction
         return new RationalFunction(Field, num, den);
     }
 
+    private static LaurentPolynomial Mul(LaurentPolynomial a, LaurentPolynomial b) => PolynomialProducts.Multiply(a, b);
+
     /// <summary>Integer power; negative exponents invert first.</summary>
     /// <param name="exponent">The exponent.</param>
     /// <returns>this^<paramref name="exponent"/> (f^0 = 1, also for f = 0).</returns>
@@ -231,6 +233,6 @@ public sealed partial class RationalFunction
         }
         if (IsZero) return this;
         // powers of coprime polynomials stay coprime; a power of a primitive positive polynomial is primitive positive
-        return new RationalFunction(Field, Numerator.Pow(exponent), Denominator.Pow(exponent));
+        return new RationalFunction(Field, PolynomialProducts.Pow(Numerator, exponent), PolynomialProducts.Pow(Denominator, exponent));
     }
 }

@@ -13,7 +13,7 @@ public sealed partial class RationalFunction
         var dn = Numerator.Derivative(v);
         if (Denominator.IsOne) return new RationalFunction(Field, dn, Denominator);
         var dd = Denominator.Derivative(v);
-        return Canonical(Field, dn * Denominator - Numerator * dd, Denominator * Denominator);
+        return Canonical(Field, PolynomialProducts.Multiply(dn, Denominator) - PolynomialProducts.Multiply(Numerator, dd), PolynomialProducts.Multiply(Denominator, Denominator));
     }
 
     /// <summary>Total degree of the numerator.</summary>

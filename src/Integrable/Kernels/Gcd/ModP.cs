@@ -86,8 +86,22 @@ internal readonly struct ModP
     public ulong FromInteger(in Rational r)
     {
         if (r.TryGetSmall(out long n, out _)) return FromLong(n);
-        var m = BigInteger.Remainder(r.Numerator, P);
-        return m.Sign < 0 ? (ulong)(m + P) : (ulong)m;
+        return FromBig(r.Numerator);
+    }
+
+    /// <summary>The residue of a big integer, by Horner over its 64-bit limbs (no allocation).</summary>
+    public ulong FromBig(BigInteger x)
+    {
+        int bytes = x.GetByteCount(isUnsigned: false);
+        Span<byte> buf = bytes <= 512 ? stackalloc byte[(bytes + 7) & ~7] : new byte[(bytes + 7) & ~7];
+        var abs = BigInteger.Abs(x);
+        buf.Clear();
+        abs.TryWriteBytes(buf, out _, isUnsigned: true, isBigEndian: false);
+        var limbs = System.Runtime.InteropServices.MemoryMarshal.Cast<byte, ulong>(buf);
+        ulong t64 = (ulong)(((UInt128)1 << 64) % P);
+        ulong r = 0;
+        for (int i = limbs.Length - 1; i >= 0; i--) r = Add(Mul(r, t64), limbs[i] % P);
+        return x.Sign < 0 ? Neg(r) : r;
     }
 
     /// <summary>The symmetric representative in (−p/2, p/2].</summary>

@@ -246,7 +246,7 @@ internal static class ModularGcd
     {
         if (a.IsConstant) return b.Scale(a.Coeffs[0].Numerator);
         if (b.IsConstant) return a.Scale(b.Coeffs[0].Numerator);
-        PolynomialMultiply.Multiply(a.Coeffs, a.Exps, b.Coeffs, b.Exps, a.Vars, out var c, out var e);
+        SplitMultiply.Multiply(a.Coeffs, a.Exps, b.Coeffs, b.Exps, a.Vars, out var c, out var e);
         return new IntPoly(a.Vars, c, e);
     }
 
@@ -274,6 +274,10 @@ internal static class ModularGcd
             q = a.DivideExact(c);
             return true;
         }
+        // Past word-size coefficients the shared kernel computes with big integers; the multi-modular
+        // division is much faster when its dense box is small.
+        if ((a.Log2MaxAbs() > 62 || d.Log2MaxAbs() > 62) && ModularDivision.Applies(a))
+            return ModularDivision.TryDivide(a, d, out q);
         if (!PolynomialDivide.TryDivide(a.Coeffs, a.Exps, d.Coeffs, d.Exps, a.Vars, out var qc, out var qe)) return false;
         foreach (var x in qc) if (!x.IsInteger) return false;
         // Laurent division may shift exponents; an exact polynomial quotient has none negative.

@@ -8,6 +8,8 @@ internal static class CommandLineApp
     [
         new DemoCommand(),
         new IterateCommand(),
+        new MutateCommand(),
+        new ExploreCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

@@ -8,6 +8,8 @@ internal static class CommandLineApp
     [
         new DemoCommand(),
         new IterateCommand(),
+        new MutateCommand(),
+        new ExploreCommand(),
         new LaurentCommand(),
         new GrowthCommand(),
         new PeriodCommand(),

@@ -283,7 +283,7 @@ public sealed class LaurentPolynomialDivisionTests
         foreach (var t in d.Terms)
         {
             var e = t.Exponents.ToArray();
-            if (best is null || Kernels.PolynomialDivRem.Compare(e, best, (int)order) > 0) best = e;
+            if (best is null || global::Integrable.Kernels.PolynomialDivRem.Compare(e, best, (int)order) > 0) best = e;
         }
         return best!;
     }

@@ -1,0 +1,44 @@
+using System.Diagnostics;
+using System.Globalization;
+using Integrable.Polynomials;
+using Integrable.Recursions;
+
+namespace Integrable.Benchmarks;
+
+/// <summary>Workload W4 (as the FLINT reference script w4_tsystem/tsystem_flint): the two-index T-system
+/// T_{a,n+1} T_{a,n-1} = T_{a,n}^2 + T_{a+1,n} T_{a-1,n} (A_∞, no boundary) from the 4N − 4 symbols T_{a,0}
+/// (|a| ≤ N−2) and T_{a,1} (|a| ≤ N−1), through <see cref="TSystem.EvaluateReduced{T}"/> over
+/// <see cref="LaurentPolynomialRing"/>. Usage: <c>-- W4 N</c>. Prints
+/// <c>n=N terms=&lt;terms of T_{0,N}&gt; seconds=&lt;wall time for T_{0,N} from scratch&gt; coeffsum=&lt;value at all ones&gt;</c>.</summary>
+public sealed class W4Workload : IWorkload
+{
+    /// <inheritdoc/>
+    public string Name => "W4";
+
+    /// <inheritdoc/>
+    public string Run(string[] args)
+    {
+        int n = args.Length > 0 ? int.Parse(args[0], CultureInfo.InvariantCulture) : 5;
+        if (n < 2) throw new ArgumentOutOfRangeException(nameof(args), n, "N must be at least 2");
+        Compute(Math.Min(n, 4));   // warm-up (JIT), not timed
+        var (value, seconds, cpu) = Compute(n);
+        return $"n={n} terms={value.TermCount} seconds={seconds.ToString("0.0000", CultureInfo.InvariantCulture)} cpu={cpu.ToString("0.0000", CultureInfo.InvariantCulture)} coeffsum={W2Workload.CoefficientSum(value)}";
+    }
+
+    private static (LaurentPolynomial Value, double Seconds, double Cpu) Compute(int n)
+    {
+        // Variable order of the reference: u_a = T_{a,0} for a = -(N-2)..N-2, then v_a = T_{a,1} for a = -(N-1)..N-1.
+        var names = new List<string>();
+        for (int a = -(n - 2); a <= n - 2; a++) names.Add($"u_{{{a}}}");
+        for (int a = -(n - 1); a <= n - 1; a++) names.Add($"v_{{{a}}}");
+        var ring = new LaurentPolynomialRing([.. names]);
+        var u = Enumerable.Range(0, 2 * n - 3).Select(ring.Variable).ToArray();
+        var v = Enumerable.Range(2 * n - 3, 2 * n - 1).Select(ring.Variable).ToArray();
+        LaurentPolynomial Initial(int a, int k) => k == 0 ? u[a + n - 2] : v[a + n - 1];
+        var c0 = W2Workload.ProcessCpu();
+        long t0 = Stopwatch.GetTimestamp();
+        var value = TSystem.Unbounded.EvaluateReduced(ring, 0, n, Initial);
+        double seconds = Stopwatch.GetElapsedTime(t0).TotalSeconds;
+        return (value, seconds, W2Workload.ProcessCpu() - c0);
+    }
+}

@@ -47,9 +47,9 @@ internal sealed class LaurentCommand : CliCommand
             {
                 throw new CliUsageException($"cannot read the matrix or mutation sequence: {e.Message}");
             }
-            catch (FormatException e)
+            catch (Exception e) when (e is FormatException or ArgumentException)
             {
-                throw new CliUsageException($"cannot read the matrix: {e.Message}");
+                throw new CliUsageException($"cannot use the matrix: {e.Message.Split('\n')[0]}");
             }
             if (dirs.Count == 0) throw new CliUsageException("--mutations: give at least one direction");
             foreach (var k in dirs)

@@ -38,12 +38,12 @@ internal static partial class PolyMod
 
     /// <summary>Euclidean steps in place, with the transition matrix when requested, until the second
     /// remainder has degree &lt; m (m = 0: to the end). Buffers are allocated once; no allocation per step.</summary>
-    private static (PolyMatrix? M, ulong[] C, ulong[] D) EuclidSteps(in ModulusReducer mod, ulong[] a, ulong[] b, int m, bool needMatrix)
+    private static (PolyMatrix? M, ulong[] C, ulong[] D) EuclidSteps(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int m, bool needMatrix)
     {
         int la = a.Length, lb = b.Length;
-        var r0 = (ulong[])a.Clone();
+        var r0 = a.ToArray();
         var r1 = new ulong[Math.Max(la, 1)];
-        b.CopyTo(r1, 0);
+        b.CopyTo(r1);
         var q = new ulong[la];
         int cap = la + 1;
         ulong[]? m00 = null, m01 = null, m10 = null, m11 = null;

@@ -72,14 +72,14 @@ internal static partial class PolyMod
     /// a div x^m, b div x^m; one explicit division step follows; the second half is computed from the
     /// top parts of the new pair shifted by k = 2m − deg. The reduced pair is recombined from the
     /// recursive result on the top part plus the matrix applied to the dropped low part only.</remarks>
-    public static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcd(PolyModContext ctx, ulong[] a, ulong[] b, bool needMatrix)
+    public static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcd(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, bool needMatrix)
     {
         int n = a.Length - 1, m = (n + 1) / 2;
-        if (b.Length - 1 < m) return (needMatrix ? PolyMatrix.Identity() : null, a, b);
+        if (b.Length - 1 < m) return (needMatrix ? PolyMatrix.Identity() : null, a.ToArray(), b.ToArray());
         if (n < UnivariateThresholds.HalfGcdBase || n < 8) return HalfGcdBase(ctx, a, b, m, needMatrix);
 
         var (r, a1, b1) = HalfGcd(ctx, a[m..], b[m..], needMatrix: true);
-        var (x, y) = Recombine(ctx, r!, a1, b1, a.AsSpan(0, m), b.AsSpan(0, m), m, needMatrix, out var rTransforms);
+        var (x, y) = Recombine(ctx, r!, a1, b1, a[..m], b[..m], m, needMatrix, out var rTransforms);
         using var rT = rTransforms;
         if (y.Length - 1 < m) return (r, x, y);
         var (q, rem) = DivRem(ctx, x, y);
@@ -87,7 +87,7 @@ internal static partial class PolyMod
         (x, y) = (y, rem);
         if (y.Length - 1 < m) return (r, x, y);
         int k = 2 * m - (x.Length - 1);
-        var (s, a2, b2) = HalfGcd(ctx, x[k..], y.Length > k ? y[k..] : [], needMatrix: true);
+        var (s, a2, b2) = HalfGcd(ctx, x.AsSpan(k), y.Length > k ? y.AsSpan(k) : [], needMatrix: true);
         var (c, d) = Recombine(ctx, s!, a2, b2, x.AsSpan(0, k), y.AsSpan(0, Math.Min(k, y.Length)), k, needMatrix, out var sTransforms);
         using var sT = sTransforms;
         if (!needMatrix) return (null, c, d);
@@ -165,7 +165,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>Half-GCD base case: plain Euclidean steps with matrix tracking until deg b &lt; m.</summary>
-    private static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcdBase(PolyModContext ctx, ulong[] a, ulong[] b, int m, bool needMatrix)
+    private static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcdBase(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int m, bool needMatrix)
     {
         return EuclidSteps(ctx.Mod, a, b, m, needMatrix);
     }

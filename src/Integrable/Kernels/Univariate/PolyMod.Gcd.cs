@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 namespace Integrable.Kernels.Univariate;
 
@@ -5,6 +6,7 @@ internal static partial class PolyMod
 {
     /// <summary>Monic gcd of a and b (trimmed); gcd(0, 0) = 0 (empty). Plain Euclid while the larger
     /// degree is below <see cref="UnivariateThresholds.HalfGcd"/>, half-GCD reductions above.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Gcd(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         if (a.Length < b.Length) (a, b) = (b, a);
@@ -21,6 +23,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>Monic gcd by the plain Euclidean algorithm.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] GcdEuclid(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         if (a.Length < b.Length) (a, b) = (b, a);
@@ -31,6 +34,7 @@ internal static partial class PolyMod
 
     /// <summary>Monic gcd g with cofactors s, t such that s·a + t·b = g (Bézout). For a = b = 0 all
     /// three are zero; when exactly one input is zero the other is made monic.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (ulong[] G, ulong[] S, ulong[] T) ExtendedGcd(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         var mod = ctx.Mod;
@@ -72,6 +76,7 @@ internal static partial class PolyMod
     /// a div x^m, b div x^m; one explicit division step follows; the second half is computed from the
     /// top parts of the new pair shifted by k = 2m − deg. The reduced pair is recombined from the
     /// recursive result on the top part plus the matrix applied to the dropped low part only.</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcd(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, bool needMatrix)
     {
         int n = a.Length - 1, m = (n + 1) / 2;
@@ -101,6 +106,7 @@ internal static partial class PolyMod
     {
         public readonly NttMultiplier.Transformed T00 = t00, T01 = t01, T10 = t10, T11 = t11;
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void Dispose()
         {
             T00.Dispose(); T01.Dispose(); T10.Dispose(); T11.Dispose();
@@ -111,6 +117,7 @@ internal static partial class PolyMod
     /// matrix–vector products: prefixes of them are the transforms at the (shorter) product length
     /// (all of S, and R′'s first row, which is R's second row). Saves six forward transforms per half-GCD
     /// node. Returns null when the shapes do not allow it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static PolyMatrix? MatMulReusing(PolyModContext ctx, PolyMatrix s, PolyMatrix r, MatrixTransforms? sT, MatrixTransforms? rT)
     {
         if (sT is null || rT is null) return null;
@@ -144,6 +151,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>(hiA·x^k + M00·loA + M01·loB, hiB·x^k + M10·loA + M11·loB).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static (ulong[], ulong[]) Recombine(PolyModContext ctx, PolyMatrix mat, ulong[] hiA, ulong[] hiB,
         ReadOnlySpan<ulong> loA, ReadOnlySpan<ulong> loB, int k, bool keep, out MatrixTransforms? transforms)
     {
@@ -154,6 +162,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>low + high·x^k, trimmed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ulong[] AddShifted(in ModulusReducer mod, ReadOnlySpan<ulong> low, ReadOnlySpan<ulong> high, int k)
     {
         if (high.IsEmpty) return low.ToArray();
@@ -165,6 +174,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>Half-GCD base case: plain Euclidean steps with matrix tracking until deg b &lt; m.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcdBase(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int m, bool needMatrix)
     {
         return EuclidSteps(ctx.Mod, a, b, m, needMatrix);
@@ -176,6 +186,7 @@ internal static partial class PolyMod
 
     /// <summary>As MatVec; when <paramref name="keep"/> and transforms were used, also hands back the
     /// transforms of the matrix entries (the caller disposes them).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static (ulong[], ulong[]) MatVec(PolyModContext ctx, PolyMatrix mat, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y,
         bool keep, out MatrixTransforms? transforms)
     {
@@ -236,6 +247,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>The matrix product s·r, sharing transforms when the entries are long.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static PolyMatrix MatMul(PolyModContext ctx, PolyMatrix s, PolyMatrix r)
     {
         int small = Math.Min(MinEntry(s), MinEntry(r));
@@ -269,6 +281,7 @@ internal static partial class PolyMod
         return new PolyMatrix(Entry(s00, r00, s01, r10), Entry(s00, r01, s01, r11), Entry(s10, r00, s11, r10), Entry(s10, r01, s11, r11));
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int MinEntry(PolyMatrix m)
     {
         int r = int.MaxValue;
@@ -286,6 +299,7 @@ internal static partial class PolyMod
         a.IsEmpty || b.IsEmpty ? 0 : a.Length + b.Length - 1;
 
     /// <summary>a1·b1 + a2·b2, trimmed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ulong[] Dot(PolyModContext ctx, ReadOnlySpan<ulong> a1, ReadOnlySpan<ulong> b1, ReadOnlySpan<ulong> a2, ReadOnlySpan<ulong> b2)
     {
         var p1 = Multiply(ctx, a1, b1);
@@ -294,6 +308,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>res(a, b) along the Euclidean remainder sequence (0 when either is zero).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong Resultant(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         var mod = ctx.Mod;

@@ -124,13 +124,18 @@ internal static partial class PolyMod
         if (lb <= 1) return [];
         if (q.IsEmpty) return Trim(a[..Math.Min(a.Length, lb - 1)].ToArray());
         int len = NttMultiplier.TransformLength(lb - 1);
+        var mod = ctx.Mod;
+        var r = NewArray(lb - 1);
         if (!TransformPays(ctx, Math.Max(q.Length, lb), Math.Min(q.Length, lb), len))
-            return RemainderFromQuotient(ctx.Mod, a, b, q);
+        {
+            if (len <= NttMultiplier.MaxLength) return RemainderFromQuotient(ctx.Mod, a, b, q);
+            var full = Multiply(ctx, q, b);                        // beyond the largest transform: chunked product
+            for (int i = 0; i < lb - 1; i++) r[i] = mod.Sub(i < a.Length ? a[i] : 0, i < full.Length ? full[i] : 0);
+            return Trim(r);
+        }
         var qb = NewArray(len);
         ctx.Ntt.MultiplyCyclic(q, b, len, qb);
         // Fold a mod x^len − 1 as well; the difference is r (deg r < lb − 1 ≤ len).
-        var mod = ctx.Mod;
-        var r = NewArray(lb - 1);
         for (int i = 0; i < lb - 1; i++)
         {
             ulong s = 0;

@@ -203,9 +203,12 @@ internal static partial class PolyMod
         // Transform length: the smallest power of two holding the whole product, or a smaller one with the
         // vector cut into chunks of L − lenM + 1 coefficients, whichever has the lower cost
         // (4 + 4c)·L·log L (4 matrix transforms, then per chunk 2 forward and 2 inverse).
-        int len = NttMultiplier.TransformLength(lenM + lenV - 1), chunk = lenV;
-        double best = 8.0 * len * BitOperations.Log2((uint)len);
-        for (int cand = len / 2; cand >= 2 * lenM && cand >= 16; cand /= 2)
+        int full = NttMultiplier.TransformLength(lenM + lenV - 1);
+        int len = full, chunk = lenV;
+        double best = full <= NttMultiplier.MaxLength ? 8.0 * len * BitOperations.Log2((uint)len) : double.MaxValue;
+        if (2 * lenM > NttMultiplier.MaxLength)
+            return (Dot(ctx, mat.M00, x, mat.M01, y), Dot(ctx, mat.M10, x, mat.M11, y));   // beyond the transforms
+        for (int cand = Math.Min(full / 2, NttMultiplier.MaxLength); cand >= 2 * lenM && cand >= 16; cand /= 2)
         {
             int ch = cand - lenM + 1, c = (lenV + ch - 1) / ch;
             double cost = (4.0 + 4.0 * c) * cand * BitOperations.Log2((uint)cand);
@@ -259,6 +262,10 @@ internal static partial class PolyMod
         int n = Math.Max(Math.Max(s.M00.Length, s.M01.Length), Math.Max(s.M10.Length, s.M11.Length))
               + Math.Max(Math.Max(r.M00.Length, r.M01.Length), Math.Max(r.M10.Length, r.M11.Length)) - 1;
         int len = NttMultiplier.TransformLength(n);
+        if (len > NttMultiplier.MaxLength)
+            return new PolyMatrix(
+                Dot(ctx, s.M00, r.M00, s.M01, r.M10), Dot(ctx, s.M00, r.M01, s.M01, r.M11),
+                Dot(ctx, s.M10, r.M00, s.M11, r.M10), Dot(ctx, s.M10, r.M01, s.M11, r.M11));
         long terms = 2L * Math.Min(s.MaxLength, r.MaxLength);
         int kp = ntt.PrimesFor(terms);
         using var s00 = ntt.Transform(s.M00, len, kp);

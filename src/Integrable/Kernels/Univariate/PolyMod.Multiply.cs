@@ -58,7 +58,8 @@ internal static partial class PolyMod
             return;
         }
         bool kara = lb >= UnivariateThresholds.Karatsuba;
-        if (TransformPays(ctx, la, lb, NttMultiplier.TransformLength(la + lb - 1))) ctx.Ntt.Multiply(a, b, dst);
+        int len = NttMultiplier.TransformLength(la + lb - 1);
+        if (len > NttMultiplier.MaxLength || TransformPays(ctx, la, lb, len)) ctx.Ntt.Multiply(a, b, dst);   // (chunked beyond the largest transform)
         else if (kara) MultiplyKaratsuba(ctx.Mod, a, b, dst);
         else MultiplySchoolbook(ctx.Mod, a, b, dst);
     }
@@ -68,7 +69,7 @@ internal static partial class PolyMod
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TransformPays(PolyModContext ctx, int la, int lb, int len)
     {
-        if (lb < UnivariateThresholds.Ntt) return false;
+        if (lb < UnivariateThresholds.Ntt || len > NttMultiplier.MaxLength) return false;
         double transformCost = UnivariateThresholds.TransformCostFactor * ctx.Ntt.PrimesFor(lb) * len * System.Numerics.BitOperations.Log2((uint)len);
         bool kara = lb >= UnivariateThresholds.Karatsuba;
         double classicalCost = (double)la * lb * (kara ? Math.Pow((double)UnivariateThresholds.Karatsuba / lb, 0.415) : 1.0);

@@ -33,6 +33,7 @@ public abstract class W3WorkloadBase : IWorkload
         int deg = 0;
         for (int r = 0; r < reps; r++)
             (deg, times[r]) = Iterate(nmax, verbose: r == 0 && !quiet);
+        if (!quiet || reps > 1) Console.WriteLine("  per-repetition seconds: " + string.Join(" ", times.Select(t => t.ToString("F3", CultureInfo.InvariantCulture))));
         Array.Sort(times);
         return $"map={(Hietarinta ? "hv" : "qrt")} N={nmax} degnum={deg} seconds={Timing.Seconds(times[reps / 2])} reps={reps}";
     }

@@ -10,6 +10,10 @@ internal static class CommandLineApp
         new IterateCommand(),
         new MutateCommand(),
         new ExploreCommand(),
+        new LaurentCommand(),
+        new GrowthCommand(),
+        new PeriodCommand(),
+        new ConfineCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

@@ -93,8 +93,8 @@ internal sealed class NttMultiplier
     /// <summary>The modulus p.</summary>
     public ulong Modulus => _mod.P;
 
-    /// <summary>Largest supported transform length.</summary>
-    public static int MaxLength => 1 << NttPrime.MaxLog;
+    /// <summary>Largest transform length used (2^23; tests lower it to exercise the chunked paths).</summary>
+    internal static int MaxLength = 1 << NttPrime.MaxLog;
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static uint FindPrimitiveRoot(uint p)

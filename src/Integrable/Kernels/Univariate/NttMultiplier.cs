@@ -93,8 +93,8 @@ internal sealed class NttMultiplier
     /// <summary>The modulus p.</summary>
     public ulong Modulus => _mod.P;
 
-    /// <summary>Largest supported transform length.</summary>
-    public static int MaxLength => 1 << NttPrime.MaxLog;
+    /// <summary>Largest transform length used (2^23; tests lower it to exercise the chunked paths).</summary>
+    internal static int MaxLength = 1 << NttPrime.MaxLog;
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static uint FindPrimitiveRoot(uint p)
@@ -351,7 +351,35 @@ internal sealed class NttMultiplier
         fixed (uint* a0 = r0)
         fixed (uint* a1 = r1)
         fixed (uint* a2 = r2)
+        fixed (ulong* d = dst)
         {
+            if (_finalVector && NttPrime.Use512)
+            {
+                var w0 = Vector512.Create(p0.Q); var w1 = Vector512.Create(p1.Q); var w2 = Vector512.Create(p2.Q);
+                var wi0 = Vector512.Create(p0.QInv); var wi1 = Vector512.Create(p1.QInv); var wi2 = Vector512.Create(p2.QInv);
+                var ws0 = Vector512.Create(s0); var ws1 = Vector512.Create(s1); var ws2 = Vector512.Create(s2);
+                var wi10 = Vector512.Create(_garnerInv[1][0]);
+                var wi20 = Vector512.Create(_garnerInv[2][0]);
+                var wi21 = Vector512.Create(_garnerInv[2][1]);
+                var wp = Vector512.Create((uint)_mod.P);
+                var wpinv = Vector512.Create(_pInv32);
+                var wc1 = Vector512.Create(_c1Mont);
+                var wc2 = Vector512.Create(_c2Mont);
+                for (; j + 16 <= count; j += 16)
+                {
+                    var t0 = NttPrime.WMontMul(Avx512F.LoadVector512(a0 + j), ws0, w0, wi0);
+                    var x1 = NttPrime.WMontMul(Avx512F.LoadVector512(a1 + j), ws1, w1, wi1);
+                    var t1 = NttPrime.WMontMul(NttPrime.WSub(x1, Avx512F.Min(t0, Avx512F.Subtract(t0, w1)), w1), wi10, w1, wi1);
+                    var x2 = NttPrime.WMontMul(Avx512F.LoadVector512(a2 + j), ws2, w2, wi2);
+                    x2 = NttPrime.WMontMul(NttPrime.WSub(x2, Avx512F.Min(t0, Avx512F.Subtract(t0, w2)), w2), wi20, w2, wi2);
+                    var t2 = NttPrime.WMontMul(NttPrime.WSub(x2, Avx512F.Min(t1, Avx512F.Subtract(t1, w2)), w2), wi21, w2, wi2);
+                    var u1 = NttPrime.WMontMul(t1, wc1, wp, wpinv);
+                    var u2 = NttPrime.WMontMul(t2, wc2, wp, wpinv);
+                    var sum = NttPrime.WAdd(NttPrime.WAdd(t0, u1, wp), u2, wp);
+                    Avx512F.Store(d + j, Avx512F.ConvertToVector512UInt64(sum.GetLower()));
+                    Avx512F.Store(d + j + 8, Avx512F.ConvertToVector512UInt64(sum.GetUpper()));
+                }
+            }
             for (; j + 8 <= count; j += 8)
             {
                 var t0 = NttPrime.VMontMul(Avx.LoadVector256(a0 + j), vs0, q0, qi0);
@@ -370,11 +398,8 @@ internal sealed class NttMultiplier
                     var u1 = NttPrime.VMontMul(t1, vc1, vp, vpinv);
                     var u2 = NttPrime.VMontMul(t2, vc2, vp, vpinv);
                     var sum = NttPrime.VAdd(NttPrime.VAdd(t0, u1, vp), u2, vp);
-                    fixed (ulong* d = dst)
-                    {
-                        Avx.Store(d + j, Avx2.ConvertToVector256Int64(sum.GetLower()).AsUInt64());
-                        Avx.Store(d + j + 4, Avx2.ConvertToVector256Int64(sum.GetUpper()).AsUInt64());
-                    }
+                    Avx.Store(d + j, Avx2.ConvertToVector256Int64(sum.GetLower()).AsUInt64());
+                    Avx.Store(d + j + 4, Avx2.ConvertToVector256Int64(sum.GetUpper()).AsUInt64());
                     continue;
                 }
                 Avx.Store(t0s, t0); Avx.Store(t1s, t1); Avx.Store(t2s, t2);

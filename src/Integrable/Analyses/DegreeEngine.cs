@@ -54,7 +54,12 @@ internal static class DegreeEngine
             }
             line.Steps++;
             line.Last.Clear();
-            foreach (var f in fresh) line.Last.Add(line.Field.Degrees(f));
+            for (int u = 0; u < fresh.Length; u++)
+            {
+                var reduced = line.Field.Reduce(fresh[u]);
+                line.State[map.NewestSlot(u)] = reduced;
+                line.Last.Add(line.Field.Degrees(reduced));
+            }
             return true;
         }
 

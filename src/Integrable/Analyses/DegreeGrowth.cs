@@ -7,7 +7,8 @@ namespace Integrable.Analyses;
 /// growth class and, for exponential growth, the entropy log λ with λ given by its minimal polynomial.</summary>
 /// <remarks>
 /// <para>Degrees are measured on random lines x_i = a_i + b_i t over Z/pZ for random primes p: the iterate
-/// is a univariate rational function in t reduced to lowest terms (fast products and half-gcd), and
+/// is a univariate rational function in t: each step combines fractions without gcds (as the compiled
+/// rule dictates) and reduces each new term once (fast products and half-gcd), and
 /// its degree max(deg num, deg den) equals d_n unless the line is special. Two independent lines run in
 /// lockstep; when they disagree at a step, further lines recomputed from the start decide (the step is
 /// redone). Parameters without a value are given random values on each line (generic parameters).
@@ -39,7 +40,7 @@ public static class DegreeGrowth
     {
         ArgumentNullException.ThrowIfNull(recurrence);
         options ??= GrowthOptions.Default;
-        return DegreeEngine.Run(new RecursionMap(recurrence, options.Start), steps, options, f => new ModularLineField(f), progress, cancellation);
+        return DegreeEngine.Run(new RecursionMap(recurrence, options.Start), steps, options, f => new UnreducedLineField(f), progress, cancellation);
     }
 
     /// <summary>Analyses a system; the degree of a step is the largest degree of its new terms.</summary>
@@ -58,6 +59,6 @@ public static class DegreeGrowth
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
         ArgumentNullException.ThrowIfNull(system);
-        return DegreeEngine.Run(new RecursionMap(system), steps, options ?? GrowthOptions.Default, f => new ModularLineField(f), progress, cancellation);
+        return DegreeEngine.Run(new RecursionMap(system), steps, options ?? GrowthOptions.Default, f => new UnreducedLineField(f), progress, cancellation);
     }
 }

@@ -15,6 +15,9 @@ internal interface ILineField<T> : IRing<T>
     /// <summary>The constant c.</summary>
     T Residue(ulong c);
 
-    /// <summary>Degrees of the reduced numerator and denominator (numerator −1 for zero).</summary>
+    /// <summary>The value in lowest terms (called once per new term; ring operations may leave fractions unreduced).</summary>
+    T Reduce(T value);
+
+    /// <summary>Degrees of the numerator and denominator of a reduced value (numerator −1 for zero).</summary>
     (int Numerator, int Denominator) Degrees(T value);
 }

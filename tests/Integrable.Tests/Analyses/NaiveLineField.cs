@@ -16,6 +16,7 @@ internal sealed class NaiveLineField(PrimeField field) : ILineField<NaiveFractio
     public NaiveFraction FromRational(Rational value) => Residue(Field.FromRational(value));
     public NaiveFraction Residue(ulong c) => c == 0 ? Zero : new([c], [1]);
     public NaiveFraction Line(ulong a, ulong b) => new(Trim([a, b]), [1]);
+    public NaiveFraction Reduce(NaiveFraction v) => v;
     public (int Numerator, int Denominator) Degrees(NaiveFraction v) => (v.Num.Length - 1, v.Den.Length - 1);
     public bool IsZero(NaiveFraction a) => a.Num.Length == 0;
     public bool AreEqual(NaiveFraction a, NaiveFraction b) => a.Num.AsSpan().SequenceEqual(b.Num) && a.Den.AsSpan().SequenceEqual(b.Den);

@@ -78,7 +78,7 @@ public sealed class PolynomialGcdEdgeCaseTests
     [Fact]
     public void Gcd_ManyVariables_SparseFactors()
     {
-        var ring = new LaurentPolynomialRing(Enumerable.Range(0, 6).Select(i => $"v_{i}").ToArray());
+        var ring = new LaurentPolynomialRing(Enumerable.Range(0, 9).Select(i => $"v_{i}").ToArray());
         var rng = new Random(9);
         for (int i = 0; i < 4; i++)
         {

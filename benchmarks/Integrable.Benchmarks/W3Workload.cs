@@ -29,12 +29,32 @@ public abstract class W3WorkloadBase : IWorkload
         int nmax = args.Length > 0 ? int.Parse(args[0], CultureInfo.InvariantCulture) : DefaultN;
         int reps = args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 1;
         bool quiet = args.Contains("quiet");
+        bool rf = args.Contains("rf");
         var times = new double[reps];
         int deg = 0;
         for (int r = 0; r < reps; r++)
-            (deg, times[r]) = Iterate(nmax, verbose: r == 0 && !quiet);
+            (deg, times[r]) = rf ? IterateRationalFunctions(nmax, verbose: r == 0 && !quiet) : Iterate(nmax, verbose: r == 0 && !quiet);
+        if (!quiet || reps > 1) Console.WriteLine("  per-repetition seconds: " + string.Join(" ", times.Select(t => t.ToString("F3", CultureInfo.InvariantCulture))));
         Array.Sort(times);
-        return $"map={(Hietarinta ? "hv" : "qrt")} N={nmax} degnum={deg} seconds={Timing.Seconds(times[reps / 2])} reps={reps}";
+        return $"map={(Hietarinta ? "hv" : "qrt")}{(rf ? " arithmetic=RationalFunctionModP" : "")} N={nmax} degnum={deg} seconds={Timing.Seconds(times[reps / 2])} reps={reps}";
+    }
+
+    /// <summary>The same map written with <see cref="RationalFunctionModP"/> field operations (the library's
+    /// own cancellation strategy instead of the reference's single generic gcd); option <c>rf</c>.</summary>
+    public (int Degree, double Seconds) IterateRationalFunctions(int nmax, bool verbose)
+    {
+        var f = new PrimeField(Prime);
+        var x0 = RationalFunctionModP.FromPolynomial(PolynomialModP.FromCoefficients(f, 123456789, 987654321));
+        var x1 = RationalFunctionModP.FromPolynomial(PolynomialModP.FromCoefficients(f, 192837465, 564738291));
+        var sw = Stopwatch.StartNew();
+        for (int n = 1; n < nmax; n++)
+        {
+            var next = Hietarinta ? x1 + x1.Pow(-2) - x0 : x1.Inverse() + x1.Pow(-2) - x0;
+            (x0, x1) = (x1, next);
+            if (verbose)
+                Console.WriteLine($"  n={n + 1} degnum={x1.NumeratorDegree} degden={x1.DenominatorDegree} seconds={Timing.Seconds(sw.Elapsed.TotalSeconds)}");
+        }
+        return (x1.NumeratorDegree, sw.Elapsed.TotalSeconds);
     }
 
     /// <summary>Runs the iteration to x_N; returns the numerator degree of x_N and the cumulative seconds.</summary>

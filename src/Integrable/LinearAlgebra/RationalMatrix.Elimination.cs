@@ -41,7 +41,12 @@ public sealed partial class RationalMatrix
     /// the free column f has 1 in column f, 0 in the other free columns and minus the reduced-form
     /// entries of column f in the pivot columns (so it vanishes after column f). Rows are ordered by
     /// free column. The result has been verified exactly: A times each vector is zero and the count is
-    /// the nullity.</remarks>
+    /// the nullity.
+    /// <para>Performance: rows are first scaled to integers (by the lcm of each row's denominators).
+    /// For huge rational entries this scaling (gcds and exact divisions of big integers) dominates the
+    /// cost; a caller that knows a common denominator of each row — for monomials evaluated at a point
+    /// x = a/b, y = c/d, the factor b^D·d^D — should pass the integer rows instead: the kernel is the
+    /// same and the scaling disappears.</para></remarks>
     public RationalMatrix Nullspace() => BuildKernel(Echelon(), ColumnCount);
 
     internal static RationalMatrix BuildKernel(EchelonData<Rational> e, int columns)

@@ -118,8 +118,9 @@ public class RationalFunctionModPTests
     public void HietarintaVialletLine_DegreesMatchTheKnownSequence()
     {
         // x_{n+1} = x_n + 1/x_n² − x_{n−1} on the line x_0 = a + b t, x_1 = c + d t: numerator degrees
-        // 3, 9, 25, 67, 177, 465 for n = 2..7 (d_{n+1} = 3 d_n − d_{n−1} + 1; Hietarinta and Viallet,
-        // "Singularity confinement and chaos in discrete systems", PRL 81 (1998) 325).
+        // 3, 9, 25, 67, 177, 465 for n = 2..7, the project's W3 reference values (FLINT, Singular and PARI
+        // runs), d_{n+1} = 3 d_n − d_{n−1} + 1, i.e. growth (3 + √5)/2 as found by Hietarinta and Viallet,
+        // "Singularity confinement and chaos in discrete systems", Phys. Rev. Lett. 81 (1998) 325.
         var f = new PrimeField(2147483647);
         var x0 = RationalFunctionModP.FromPolynomial(PolynomialModP.FromCoefficients(f, 123456789, 987654321));
         var x1 = RationalFunctionModP.FromPolynomial(PolynomialModP.FromCoefficients(f, 192837465, 564738291));

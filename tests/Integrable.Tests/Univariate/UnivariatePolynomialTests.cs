@@ -144,7 +144,8 @@ public class UnivariatePolynomialTests
             var sb = b.Coefficients.ToArray().Select(c => c.Numerator).ToArray();
             var res = UnivariatePolynomial.Resultant(a, b);
             Assert.True(res.IsInteger);
-            // Compare with the Sylvester determinant modulo two large primes.
+            // Compare with the Sylvester determinant (the definition of the resultant, common knowledge)
+            // modulo two large primes.
             foreach (ulong p in new[] { Primes.Large(5), Primes.Large(6) })
                 Assert.Equal(DeterminantModP(Sylvester(sa, sb), p), new PrimeField(p).FromRational(res));
         }

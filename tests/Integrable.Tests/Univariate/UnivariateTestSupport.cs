@@ -20,12 +20,14 @@ internal sealed class ThresholdScope : IDisposable
         _hbase = UnivariateThresholds.HalfGcdBase, _qmul = UnivariatePolynomial.ModularMultiplyThreshold,
         _zmul = IntegerPoly.ModularProductThreshold, _mat = UnivariateThresholds.MatrixTransform;
     private readonly double _factor = UnivariateThresholds.TransformCostFactor;
+    private readonly int _maxLen = NttMultiplier.MaxLength;
     private readonly bool _vector = NttPrime.AllowVector, _vector512 = NttPrime.AllowVector512, _forceZ = IntegerPoly.ForceModularProduct;
 
     public ThresholdScope(int? karatsuba = null, int? ntt = null, int? newton = null, int? halfGcd = null,
         int? halfGcdBase = null, bool? vector = null, int? rationalModular = null, int? integerModular = null,
-        int? matrixTransform = null, double? transformCostFactor = null, bool? vector512 = null)
+        int? matrixTransform = null, double? transformCostFactor = null, bool? vector512 = null, int? maxTransform = null)
     {
+        if (maxTransform is int mx) NttMultiplier.MaxLength = mx;
         if (vector512 is bool v5) NttPrime.AllowVector512 = v5;
         if (matrixTransform is int mt) UnivariateThresholds.MatrixTransform = mt;
         if (transformCostFactor is double tf) UnivariateThresholds.TransformCostFactor = tf;
@@ -48,6 +50,7 @@ internal sealed class ThresholdScope : IDisposable
         UnivariateThresholds.HalfGcdBase = _hbase;
         NttPrime.AllowVector = _vector;
         NttPrime.AllowVector512 = _vector512;
+        NttMultiplier.MaxLength = _maxLen;
         UnivariatePolynomial.ModularMultiplyThreshold = _qmul;
         IntegerPoly.ModularProductThreshold = _zmul;
         IntegerPoly.ForceModularProduct = _forceZ;

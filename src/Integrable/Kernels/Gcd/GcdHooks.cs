@@ -57,4 +57,7 @@ internal enum GcdAlgorithm
     /// <summary>Brown's algorithm interpolating the gcd only; termination when the interpolant stops
     /// changing, verification by exact division.</summary>
     BrownGcdOnly,
+    /// <summary>Zippel's sparse interpolation of the gcd (three or more variables); verification by
+    /// exact division.</summary>
+    Zippel,
 }

@@ -67,8 +67,9 @@ internal static class ModularGcd
         var ui = new int[mapArr.Length];
         for (int i = 0; i < ui.Length; i++) ui[i] = u[mapArr[i]];
 
-        var algorithm = GcdHooks.ForceAlgorithm ?? Choose(mapArr, u, degA, degB);
-        var r = Modular(Ai, Bi, algorithm);
+        var algorithm = GcdHooks.ForceAlgorithm ?? Choose(mapArr, u, degA, degB, Math.Min(A.Count, B.Count));
+        if (algorithm == GcdAlgorithm.Zippel && mapArr.Length < 3) algorithm = GcdAlgorithm.BrownGcdOnly;
+        var r = algorithm == GcdAlgorithm.Zippel ? ZippelDriver(Ai, Bi, depth) : Modular(Ai, Bi, algorithm);
 
         // Maximality: degrees equal to the upper bounds, or coprime cofactors, or split further.
         var dG = r.G.Degrees();
@@ -92,22 +93,177 @@ internal static class ModularGcd
     private static int Points(int v, int[] u, int[] degA, int[] degB) =>
         Math.Max(u[v], Math.Max(degA[v] - u[v], degB[v] - u[v])) + 1;
 
-    /// <summary>Dispatcher. Both variants evaluate the inputs at about Π (points per evaluated
+    /// <summary>Dispatcher. Brown's variants evaluate the inputs at about Π (points per evaluated
     /// variable) points: with cofactors, max(deg g, deg ā, deg b̄) + 1 per variable, and the result is
     /// verified by two products; gcd only, deg g + 2 per variable, verified by two exact divisions,
     /// which cost about as much as products. Cofactors are interpolated unless that needs more than
-    /// <see cref="CofactorPointRatio"/> times the points (a small gcd of large inputs).</summary>
-    internal static GcdAlgorithm Choose(int[] map, int[] u, int[] degA, int[] degB)
+    /// <see cref="CofactorPointRatio"/> times the points (a small gcd of large inputs). The product grows
+    /// exponentially with the number of variables, while Zippel's sparse interpolation needs about
+    /// Σ (deg_{xᵢ} g + 2)·t univariate images for a gcd whose coefficients in x₀ have at most t terms
+    /// (t is estimated by the smaller input's term count, an upper bound); Zippel is chosen when Brown
+    /// would need more than <see cref="ZippelRatio"/> times as many images.</summary>
+    internal static GcdAlgorithm Choose(int[] map, int[] u, int[] degA, int[] degB, int minTerms)
     {
-        double withCofactors = 1, gcdOnly = 1;
+        double withCofactors = 1, gcdOnly = 1, zippel = 0;
         for (int i = 1; i < map.Length; i++)
         {
             int v = map[i];
             withCofactors *= Points(v, u, degA, degB);
             gcdOnly *= u[v] + 2;
+            zippel += (u[v] + 2.0) * (i == 1 ? 1 : minTerms);
         }
-        return withCofactors <= CofactorPointRatio * gcdOnly ? GcdAlgorithm.BrownCofactors : GcdAlgorithm.BrownGcdOnly;
+        var brown = withCofactors <= CofactorPointRatio * gcdOnly ? GcdAlgorithm.BrownCofactors : GcdAlgorithm.BrownGcdOnly;
+        double brownImages = Math.Min(withCofactors, gcdOnly);
+        if (map.Length >= 3 && brownImages > ZippelRatio * zippel) return GcdAlgorithm.Zippel;
+        return brown;
     }
+
+    /// <summary>Threshold of <see cref="Choose"/> between Brown and Zippel.</summary>
+    internal static double ZippelRatio = 4.0;
+
+    /// <summary>Zippel's method over Z: contents in x₀ and γ = gcd of the leading coefficients in x₀ by
+    /// recursive gcds (fewer variables), images H = γ·g/lc(g) mod primes by <see cref="ZippelModP"/>,
+    /// Chinese remaindering until the lift is stable, then g = primitive part of the lift in x₀ (again a
+    /// recursive gcd), accepted when it divides both inputs exactly.</summary>
+    private static IntGcd ZippelDriver(IntPoly A, IntPoly B, int depth)
+    {
+        int n = A.Vars;
+        var ca = ContentInFirst(A, depth);
+        var cb = ContentInFirst(B, depth);
+        var c = ComputeCore(ca, cb, depth + 1).G;
+        var A1 = ca.IsConstant ? A : DivideOrThrow(A, ca);
+        var B1 = cb.IsConstant ? B : DivideOrThrow(B, cb);
+        IntPoly g1, a1bar, b1bar;
+        if (IsFreeOfFirst(A1) || IsFreeOfFirst(B1))
+        {
+            g1 = IntPoly.One(n);
+            a1bar = A1;
+            b1bar = B1;
+        }
+        else
+        {
+            var gamma = ComputeCore(LeadingInFirst(A1), LeadingInFirst(B1), depth + 1).G;
+            (g1, a1bar, b1bar) = ZippelModular(A1, B1, gamma, depth);
+        }
+        // gcd = c·g1, cofactors (ca/c)·ā₁ and (cb/c)·b̄₁
+        var G = Multiply(c, g1);
+        var ABar = Multiply(DivideOrThrow(ca, c), a1bar);
+        var BBar = Multiply(DivideOrThrow(cb, c), b1bar);
+        if (G.Coeffs[0].Sign < 0) { G = G.Scale(-1); ABar = ABar.Scale(-1); BBar = BBar.Scale(-1); }
+        return new IntGcd(G, ABar, BBar);
+    }
+
+    private static IntGcd ZippelModular(IntPoly A, IntPoly B, IntPoly gamma, int depth)
+    {
+        int n = A.Vars;
+        var acc = new CrtAccumulator(n);
+        var dA = A.Degrees();
+        var dB = B.Degrees();
+        double capBits = 256 + 4 * (gamma.Log2Norm2() + A.Log2Norm2() + B.Log2Norm2() + dA.Sum() + dB.Sum());
+        int primeIndex = 0, restarts = 0, failures = 0;
+        GcdHooks.PrimesUsed = 0;
+        while (true)
+        {
+            ulong p = NextPrime(ref primeIndex);
+            var f = new ModP(p);
+            if (f.FromInteger(A.Coeffs[0]) == 0 || f.FromInteger(B.Coeffs[0]) == 0) continue;
+            var gp = gamma.Reduce(f);
+            if (gp.IsZero) continue;
+            var h = new ZippelModP(f, A.Reduce(f), B.Reduce(f), gp, p ^ 0x9E3779B97F4A7C15UL).Interpolate();
+            GcdHooks.PrimesUsed++;
+            if (h is null || h.IsZero)
+            {
+                if (++failures > 64) throw new InvalidOperationException("Modular gcd (Zippel): too many primes failed.");
+                continue;
+            }
+            if (acc.PrimeCount > 0)
+            {
+                int cmp = PolynomialAdd.Compare(h.Exps.AsSpan(0, n), acc.Leading);
+                if (cmp > 0) { GcdHooks.UnluckyPrimes++; continue; }
+                if (cmp < 0) { GcdHooks.Restarts++; acc.Reset(); }
+            }
+            bool stable = acc.Add(h, f);
+            if (stable)
+            {
+                var lift = acc.Reconstruct();
+                var cont = ContentInFirst(lift, depth);
+                var g = cont.IsConstant ? lift : DivideOrThrowNull(lift, cont);
+                if (g is not null)
+                {
+                    var ic = g.Content();
+                    if (g.Coeffs[0].Sign < 0) ic = -ic;
+                    g = g.DivideExact(ic);
+                    if (TryDivide(A, g, out var abar) && TryDivide(B, g, out var bbar)) return new IntGcd(g, abar, bbar);
+                }
+                GcdHooks.FailedVerifications++;
+            }
+            if (acc.Log2Modulus > capBits)
+            {
+                if (++restarts > MaxRestarts) throw new InvalidOperationException("Modular gcd (Zippel) did not converge.");
+                GcdHooks.Restarts++;
+                acc.Reset();
+            }
+        }
+    }
+
+    /// <summary>The coefficients of P as a polynomial in x₀ (exponent of x₀ set to 0), in order.</summary>
+    private static List<IntPoly> CoefficientsInFirst(IntPoly P)
+    {
+        int n = P.Vars;
+        var list = new List<IntPoly>();
+        int t = 0;
+        while (t < P.Count)
+        {
+            int e0 = P.Exps[t * n], u = t;
+            while (u < P.Count && P.Exps[u * n] == e0) u++;
+            var c = P.Coeffs.AsSpan(t, u - t).ToArray();
+            var e = P.Exps.AsSpan(t * n, (u - t) * n).ToArray();
+            for (int k = 0; k < u - t; k++) e[k * n] = 0;
+            list.Add(new IntPoly(n, c, e));
+            t = u;
+        }
+        return list;
+    }
+
+    private static IntPoly LeadingInFirst(IntPoly P) => CoefficientsInFirst(P)[0];
+
+    private static bool IsFreeOfFirst(IntPoly P)
+    {
+        for (int t = 0; t < P.Count; t++) if (P.Exps[t * P.Vars] != 0) return false;
+        return true;
+    }
+
+    /// <summary>Primitive gcd of the coefficients in x₀ (smallest first, stopping at 1).</summary>
+    private static IntPoly ContentInFirst(IntPoly P, int depth)
+    {
+        var cs = CoefficientsInFirst(P);
+        if (cs.Count == 1)
+        {
+            var only = cs[0];
+            var ic = only.Content();
+            if (only.Coeffs[0].Sign < 0) ic = -ic;
+            return only.DivideExact(ic);
+        }
+        cs.Sort((x, y) => x.Count.CompareTo(y.Count));
+        var g = cs[0];
+        {
+            var ic = g.Content();
+            if (g.Coeffs[0].Sign < 0) ic = -ic;
+            g = g.DivideExact(ic);
+        }
+        for (int i = 1; i < cs.Count && !g.IsConstant; i++)
+        {
+            var ci = cs[i];
+            var ic = ci.Content();
+            g = ComputeCore(g, ci.DivideExact(ic), depth + 1).G;
+        }
+        return g;
+    }
+
+    private static IntPoly DivideOrThrow(IntPoly a, IntPoly d) =>
+        TryDivide(a, d, out var q) ? q : throw new InvalidOperationException("internal error: a computed divisor does not divide");
+
+    private static IntPoly? DivideOrThrowNull(IntPoly a, IntPoly d) => TryDivide(a, d, out var q) ? q : null;
 
     private static bool SameDegrees(int[] u, int[] d)
     {

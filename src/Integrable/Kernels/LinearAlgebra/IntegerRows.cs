@@ -150,9 +150,9 @@ internal sealed class IntegerRows : IDisposable
                 if (q is not null) { quotient[j] = q; step[j] = cofactors.Count; continue; }
                 var lb = WordArithmetic.ToBigInteger(l, false);
                 var db = row[j].Denominator;
-                var g = BigInteger.GreatestCommonDivisor(lb, db);
-                var c = Words(db / g);
-                quotient[j] = Words(lb / g);
+                var gw = Words(BigInteger.GreatestCommonDivisor(lb, db));
+                var c = WordArithmetic.TryDivideExact(d, gw) ?? throw new InvalidOperationException("gcd does not divide");
+                quotient[j] = WordArithmetic.TryDivideExact(l, gw) ?? throw new InvalidOperationException("gcd does not divide");
                 cofactors.Add(c);
                 step[j] = cofactors.Count;
                 l = WordArithmetic.Multiply(l, c);

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 using Integrable.Numbers;
 
@@ -15,6 +16,7 @@ internal static class IntegerPoly
     /// <summary>Tests set this to take the modular product path whenever the threshold allows.</summary>
     internal static bool ForceModularProduct;
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger[] Trim(BigInteger[] a)
     {
         int n = a.Length;
@@ -23,6 +25,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>Largest absolute value of a coefficient.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger MaxNorm(ReadOnlySpan<BigInteger> a)
     {
         var m = BigInteger.Zero;
@@ -35,6 +38,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>⌈‖a‖₂⌉ (upper bound of the Euclidean norm).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger Norm2Ceiling(ReadOnlySpan<BigInteger> a)
     {
         var s = BigInteger.Zero;
@@ -44,6 +48,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>gcd of all coefficients (non-negative; 0 for the zero polynomial).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger Content(ReadOnlySpan<BigInteger> a)
     {
         var g = BigInteger.Zero;
@@ -56,6 +61,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>a / c for a scalar dividing every coefficient.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger[] DivideScalar(ReadOnlySpan<BigInteger> a, BigInteger c)
     {
         var r = new BigInteger[a.Length];
@@ -64,6 +70,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>Residues of the coefficients modulo p (trimmed).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Reduce(ReadOnlySpan<BigInteger> a, ulong p)
     {
         var r = new ulong[a.Length];
@@ -71,6 +78,7 @@ internal static class IntegerPoly
         return PolyMod.Trim(r);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong Residue(BigInteger x, ulong p)
     {
         if (x >= long.MinValue && x <= long.MaxValue)
@@ -88,6 +96,7 @@ internal static class IntegerPoly
     /// <remarks>Schoolbook (Int128 accumulation when the coefficients allow, BigInteger otherwise) or
     /// images modulo 62-bit primes, by a cost estimate: classical la·lb·w² word products (w words per
     /// coefficient) against k primes × (reductions (la + lb)·w + transforms 5·L·log₂L + remaindering n·k).</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger[] Multiply(ReadOnlySpan<BigInteger> a, ReadOnlySpan<BigInteger> b)
     {
         if (a.IsEmpty || b.IsEmpty) return [];
@@ -108,6 +117,7 @@ internal static class IntegerPoly
         return bits <= 126 ? MultiplyInt128(a, b) : MultiplySchoolbook(a, b);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static BigInteger[] MultiplyInt128(ReadOnlySpan<BigInteger> a, ReadOnlySpan<BigInteger> b)
     {
         var la = new Int128[a.Length];
@@ -126,6 +136,7 @@ internal static class IntegerPoly
         return Trim(r);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static BigInteger[] MultiplySchoolbook(ReadOnlySpan<BigInteger> a, ReadOnlySpan<BigInteger> b)
     {
         var r = new BigInteger[a.Length + b.Length - 1];
@@ -138,6 +149,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>Product through images modulo enough 62-bit primes that their product exceeds 2·bound.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static BigInteger[] MultiplyModular(ReadOnlySpan<BigInteger> a, ReadOnlySpan<BigInteger> b, BigInteger bound)
     {
         int n = a.Length + b.Length - 1;
@@ -160,6 +172,7 @@ internal static class IntegerPoly
     /// reconstructions agree and the candidate verifies by exact multiplication, or until the primes'
     /// product exceeds twice the Mignotte-type bound 2^deg q·‖a‖₂ on the coefficients of any true
     /// quotient (then divisibility is refuted). A non-zero remainder modulo any prime refutes it at once.</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryDivideExact(BigInteger[] a, BigInteger[] b, out BigInteger[] quotient)
     {
         quotient = [];
@@ -206,6 +219,7 @@ internal static class IntegerPoly
 
     /// <summary>The primitive gcd (positive leading coefficient) of two non-zero primitive integer
     /// polynomials, by Brown's dense modular algorithm with exact verification.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger[] GcdPrimitive(BigInteger[] a, BigInteger[] b)
     {
         if (a.Length == 1 || b.Length == 1) return [BigInteger.One];
@@ -240,6 +254,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>The primitive part with positive leading coefficient.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger[] PrimitivePositive(BigInteger[] a)
     {
         if (a.Length == 0) return a;
@@ -252,6 +267,7 @@ internal static class IntegerPoly
 
     /// <summary>res(a, b) of non-zero integer polynomials: images modulo primes not dividing either
     /// leading coefficient, combined beyond twice the Hadamard bound ‖a‖₂^deg b·‖b‖₂^deg a.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger Resultant(BigInteger[] a, BigInteger[] b)
     {
         if (a.Length == 0 || b.Length == 0) return BigInteger.Zero;
@@ -273,6 +289,7 @@ internal static class IntegerPoly
     }
 
     /// <summary>Exact evaluation of the homogenised value Σ aᵢ·uⁱ·v^(d−i) = v^d·a(u/v).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BigInteger EvaluateHomogeneous(ReadOnlySpan<BigInteger> a, BigInteger u, BigInteger v)
     {
         if (a.IsEmpty) return BigInteger.Zero;
@@ -309,6 +326,7 @@ internal sealed class MultiModular
     public bool Stable { get; private set; }
 
     /// <summary>Adds residues modulo a new prime (entries beyond the span are zero).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Add(ulong p, ReadOnlySpan<ulong> residues)
     {
         var mod = new ModulusReducer(p);

@@ -95,6 +95,7 @@ internal readonly struct ModulusReducer
     public ulong Neg(ulong a) => a == 0 ? 0 : P - a;
 
     /// <summary>a⁻¹ mod p; a must be non-zero mod p.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public ulong Inverse(ulong a)
     {
         a %= P;
@@ -112,6 +113,7 @@ internal readonly struct ModulusReducer
         return t < 0 ? (ulong)(t + (long)P) : (ulong)t;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public ulong Pow(ulong a, ulong e)
     {
         ulong r = 1 % P, b = a % P;

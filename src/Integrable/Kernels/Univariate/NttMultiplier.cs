@@ -27,6 +27,7 @@ internal sealed class NttMultiplier
 
     private static readonly NttPrime[] SharedPrimes = CreatePrimes();
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static NttPrime[] CreatePrimes()
     {
         var r = new NttPrime[PrimeTable.Length];
@@ -92,9 +93,10 @@ internal sealed class NttMultiplier
     /// <summary>The modulus p.</summary>
     public ulong Modulus => _mod.P;
 
-    /// <summary>Largest supported transform length.</summary>
-    public static int MaxLength => 1 << NttPrime.MaxLog;
+    /// <summary>Largest transform length used (2^23; tests lower it to exercise the chunked paths).</summary>
+    internal static int MaxLength = 1 << NttPrime.MaxLog;
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static uint FindPrimitiveRoot(uint p)
     {
         ulong n = p - 1;
@@ -115,6 +117,7 @@ internal sealed class NttMultiplier
 
     /// <summary>Number of transform primes needed so that output coefficients made of at most
     /// <paramref name="terms"/> coefficient products (each ≤ (p − 1)²) are recovered exactly.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public int PrimesFor(long terms)
     {
         if (_direct) return 1;
@@ -131,6 +134,7 @@ internal sealed class NttMultiplier
     public static int TransformLength(int n) => n <= 1 ? 1 : (int)BitOperations.RoundUpToPowerOf2((uint)n);
 
     /// <summary>The full product a·b into dst (length la + lb − 1), both operands non-empty.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void Multiply(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
     {
         int n = a.Length + b.Length - 1;
@@ -149,6 +153,7 @@ internal sealed class NttMultiplier
     }
 
     /// <summary>The cyclic product a·b mod (x^len − 1), len a power of two, into dst (length len).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void MultiplyCyclic(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int len, Span<ulong> dst)
     {
         int k = PrimesFor(Math.Min(Math.Min(a.Length, b.Length), len));
@@ -158,6 +163,7 @@ internal sealed class NttMultiplier
         fa.InverseTo(dst[..len]);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void MultiplyChunked(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
     {
         // Beyond the largest transform: split both operands into blocks of half the maximal length.
@@ -180,6 +186,7 @@ internal sealed class NttMultiplier
 
     /// <summary>Forward transforms of <paramref name="poly"/> (zero-padded) modulo the first
     /// <paramref name="k"/> primes at length <paramref name="len"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public Transformed Transform(ReadOnlySpan<ulong> poly, int len, int k)
     {
         if (poly.Length > len) throw new ArgumentException("polynomial longer than the transform", nameof(poly));
@@ -199,6 +206,7 @@ internal sealed class NttMultiplier
     public Transformed Allocate(int len, int k) => new(this, len, k);
 
     /// <summary>Forward transforms of <paramref name="poly"/> reduced mod x^len − 1 (folded).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public Transformed TransformWrapped(ReadOnlySpan<ulong> poly, int len, int k)
     {
         if (poly.Length <= len) return Transform(poly, len, k);
@@ -237,6 +245,7 @@ internal sealed class NttMultiplier
         public Span<uint> Row(int i) => _data.AsSpan(i * Length, Length);
 
         /// <summary>this ← this ∘ other (pointwise, Montgomery factor R⁻¹ accounted for in the inverse).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void MultiplyPointwise(Transformed other)
         {
             Check(other);
@@ -245,6 +254,7 @@ internal sealed class NttMultiplier
         }
 
         /// <summary>this ← a ∘ b.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void SetProduct(Transformed a, Transformed b)
         {
             Check(a); Check(b);
@@ -253,6 +263,7 @@ internal sealed class NttMultiplier
         }
 
         /// <summary>this ← this + a ∘ b.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void AddProduct(Transformed a, Transformed b)
         {
             Check(a); Check(b);
@@ -261,6 +272,7 @@ internal sealed class NttMultiplier
         }
 
         /// <summary>this ← this − a ∘ b.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void SubtractProduct(Transformed a, Transformed b)
         {
             Check(a); Check(b);
@@ -270,6 +282,7 @@ internal sealed class NttMultiplier
 
         /// <summary>Multiplies every value by R = 2^32 (so that a later Montgomery product with it is an
         /// ordinary product of normal-form values).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void ScaleByR()
         {
             for (int i = 0; i < Primes; i++)
@@ -280,6 +293,7 @@ internal sealed class NttMultiplier
         /// least 16) over the first <paramref name="primes"/> primes, taken from this one: the first len
         /// values of a decimation-in-frequency transform are the transform of the polynomial reduced mod
         /// x^len − 1, so for polynomials shorter than len nothing needs recomputing.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public Transformed Prefix(int len, int primes)
         {
             if (len > Length || Length % len != 0 || primes > Primes || len < 16)
@@ -289,6 +303,7 @@ internal sealed class NttMultiplier
             return t;
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private void Check(Transformed o)
         {
             if (o.Length != Length || o.Primes != Primes) throw new InvalidOperationException("transform shapes differ");
@@ -296,12 +311,14 @@ internal sealed class NttMultiplier
 
         /// <summary>Inverse transforms (destroying this buffer) and remainders mod p of the first
         /// dst.Length coefficients of the (cyclic) product.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void InverseTo(Span<ulong> dst)
         {
             for (int i = 0; i < Primes; i++) _owner._primes[i].Inverse(Row(i));
             _owner.Garner(this, dst);
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void Dispose()
         {
             if (_data is not null) ArrayPool<uint>.Shared.Return(_data);
@@ -311,6 +328,7 @@ internal sealed class NttMultiplier
 
     /// <summary>Vectorised Garner digits for three primes (eight coefficients at a time); the final
     /// t0 + t1·q0 + t2·q0·q1 mod p (p &lt; 2^32, sum &lt; 2^64) stays scalar. Returns the count done.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private unsafe int GarnerThreeVector(Span<uint> r0, Span<uint> r1, Span<uint> r2, Span<ulong> dst, int count, uint s0, uint s1, uint s2)
     {
         var p0 = _primes[0]; var p1 = _primes[1]; var p2 = _primes[2];
@@ -333,7 +351,35 @@ internal sealed class NttMultiplier
         fixed (uint* a0 = r0)
         fixed (uint* a1 = r1)
         fixed (uint* a2 = r2)
+        fixed (ulong* d = dst)
         {
+            if (_finalVector && NttPrime.Use512)
+            {
+                var w0 = Vector512.Create(p0.Q); var w1 = Vector512.Create(p1.Q); var w2 = Vector512.Create(p2.Q);
+                var wi0 = Vector512.Create(p0.QInv); var wi1 = Vector512.Create(p1.QInv); var wi2 = Vector512.Create(p2.QInv);
+                var ws0 = Vector512.Create(s0); var ws1 = Vector512.Create(s1); var ws2 = Vector512.Create(s2);
+                var wi10 = Vector512.Create(_garnerInv[1][0]);
+                var wi20 = Vector512.Create(_garnerInv[2][0]);
+                var wi21 = Vector512.Create(_garnerInv[2][1]);
+                var wp = Vector512.Create((uint)_mod.P);
+                var wpinv = Vector512.Create(_pInv32);
+                var wc1 = Vector512.Create(_c1Mont);
+                var wc2 = Vector512.Create(_c2Mont);
+                for (; j + 16 <= count; j += 16)
+                {
+                    var t0 = NttPrime.WMontMul(Avx512F.LoadVector512(a0 + j), ws0, w0, wi0);
+                    var x1 = NttPrime.WMontMul(Avx512F.LoadVector512(a1 + j), ws1, w1, wi1);
+                    var t1 = NttPrime.WMontMul(NttPrime.WSub(x1, Avx512F.Min(t0, Avx512F.Subtract(t0, w1)), w1), wi10, w1, wi1);
+                    var x2 = NttPrime.WMontMul(Avx512F.LoadVector512(a2 + j), ws2, w2, wi2);
+                    x2 = NttPrime.WMontMul(NttPrime.WSub(x2, Avx512F.Min(t0, Avx512F.Subtract(t0, w2)), w2), wi20, w2, wi2);
+                    var t2 = NttPrime.WMontMul(NttPrime.WSub(x2, Avx512F.Min(t1, Avx512F.Subtract(t1, w2)), w2), wi21, w2, wi2);
+                    var u1 = NttPrime.WMontMul(t1, wc1, wp, wpinv);
+                    var u2 = NttPrime.WMontMul(t2, wc2, wp, wpinv);
+                    var sum = NttPrime.WAdd(NttPrime.WAdd(t0, u1, wp), u2, wp);
+                    Avx512F.Store(d + j, Avx512F.ConvertToVector512UInt64(sum.GetLower()));
+                    Avx512F.Store(d + j + 8, Avx512F.ConvertToVector512UInt64(sum.GetUpper()));
+                }
+            }
             for (; j + 8 <= count; j += 8)
             {
                 var t0 = NttPrime.VMontMul(Avx.LoadVector256(a0 + j), vs0, q0, qi0);
@@ -352,11 +398,8 @@ internal sealed class NttMultiplier
                     var u1 = NttPrime.VMontMul(t1, vc1, vp, vpinv);
                     var u2 = NttPrime.VMontMul(t2, vc2, vp, vpinv);
                     var sum = NttPrime.VAdd(NttPrime.VAdd(t0, u1, vp), u2, vp);
-                    fixed (ulong* d = dst)
-                    {
-                        Avx.Store(d + j, Avx2.ConvertToVector256Int64(sum.GetLower()).AsUInt64());
-                        Avx.Store(d + j + 4, Avx2.ConvertToVector256Int64(sum.GetUpper()).AsUInt64());
-                    }
+                    Avx.Store(d + j, Avx2.ConvertToVector256Int64(sum.GetLower()).AsUInt64());
+                    Avx.Store(d + j + 4, Avx2.ConvertToVector256Int64(sum.GetUpper()).AsUInt64());
                     continue;
                 }
                 Avx.Store(t0s, t0); Avx.Store(t1s, t1); Avx.Store(t2s, t2);
@@ -368,6 +411,7 @@ internal sealed class NttMultiplier
     }
 
     /// <summary>Recombines inverse-transformed rows (still carrying the factor len·R⁻¹) to residues mod p.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal void Garner(Transformed t, Span<ulong> dst)
     {
         int k = t.Primes, len = t.Length, count = Math.Min(dst.Length, len);

@@ -96,6 +96,7 @@ internal sealed class NttPrime
     /// <summary>Plain a·b mod q.</summary>
     public uint MulMod(uint a, uint b) => (uint)((ulong)a * b % Q);
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public uint PowMod(uint a, ulong e)
     {
         ulong r = 1, b = a % Q;
@@ -112,6 +113,7 @@ internal sealed class NttPrime
     public uint ToMont(uint x) => (uint)(((ulong)x << 32) % Q);
 
     /// <summary>Makes sure the twiddle tables cover transforms of length 2^log.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void EnsureTables(int log)
     {
         if (log <= _tableLog) return;
@@ -145,6 +147,7 @@ internal sealed class NttPrime
     }
 
     /// <summary>Forward transform in place (length a power of two, tables ensured by the caller).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void Forward(Span<uint> a)
     {
         int n = a.Length;
@@ -158,6 +161,7 @@ internal sealed class NttPrime
     }
 
     /// <summary>Inverse transform in place, without the 1/n scaling.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void Inverse(Span<uint> a)
     {
         int n = a.Length;
@@ -170,6 +174,7 @@ internal sealed class NttPrime
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private unsafe void ForwardScalar(uint* a, int n, uint* w)
     {
         for (int h = n >> 1; h >= 1; h >>= 1)
@@ -182,6 +187,7 @@ internal sealed class NttPrime
                 }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private unsafe void InverseScalar(uint* a, int n, uint* w)
     {
         for (int h = 1; h < n; h <<= 1)
@@ -259,6 +265,7 @@ internal sealed class NttPrime
         return Avx2.Min(d, Avx2.Add(d, q));
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private unsafe void ForwardVector(uint* a, int n, uint* w)
     {
         var q = Vector256.Create(Q);
@@ -362,6 +369,7 @@ internal sealed class NttPrime
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private unsafe void InverseVector(uint* a, int n, uint* w)
     {
         var q = Vector256.Create(Q);
@@ -397,6 +405,7 @@ internal sealed class NttPrime
     }
 
     /// <summary>dst[i] = MontMul(dst[i], src[i]) (pointwise product, times R⁻¹).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void PointwiseMontMul(Span<uint> dst, ReadOnlySpan<uint> src)
     {
         int n = dst.Length, i = 0;
@@ -422,6 +431,7 @@ internal sealed class NttPrime
     }
 
     /// <summary>dst[i] = MontMul(dst[i], c) for a constant c (in the caller's chosen form).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void ScaleMont(Span<uint> dst, uint c)
     {
         int n = dst.Length, i = 0;
@@ -440,6 +450,7 @@ internal sealed class NttPrime
     }
 
     /// <summary>dst[i] = (dst[i] + MontMul(a[i], b[i])) mod q: accumulate a pointwise product.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void PointwiseMontMulAdd(Span<uint> dst, ReadOnlySpan<uint> a, ReadOnlySpan<uint> b)
     {
         int n = dst.Length, i = 0;
@@ -466,6 +477,7 @@ internal sealed class NttPrime
     }
 
     /// <summary>dst[i] = (dst[i] − MontMul(a[i], b[i])) mod q.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void PointwiseMontMulSub(Span<uint> dst, ReadOnlySpan<uint> a, ReadOnlySpan<uint> b)
     {
         int n = dst.Length, i = 0;
@@ -485,6 +497,7 @@ internal sealed class NttPrime
     }
 
     /// <summary>dst[i] = MontMul(a[i], b[i]) written into a separate destination.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void PointwiseMontMulTo(Span<uint> dst, ReadOnlySpan<uint> a, ReadOnlySpan<uint> b)
     {
         int n = dst.Length, i = 0;
@@ -512,6 +525,7 @@ internal sealed class NttPrime
 
     /// <summary>Loads residues x mod q of 64-bit coefficients (each &lt; 2^62) into <paramref name="dst"/>
     /// and zero-fills the rest.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public unsafe void Load(ReadOnlySpan<ulong> src, Span<uint> dst, bool small)
     {
         int m = Math.Min(src.Length, dst.Length), i = 0;

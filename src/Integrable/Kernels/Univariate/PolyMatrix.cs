@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 namespace Integrable.Kernels.Univariate;
 
 /// <summary>A 2×2 matrix of dense polynomials over Z/pZ (trimmed arrays), the transition matrix of a
@@ -17,6 +18,7 @@ internal sealed class PolyMatrix
     public int MaxLength => Math.Max(Math.Max(M00.Length, M01.Length), Math.Max(M10.Length, M11.Length));
 
     /// <summary>Left-multiplies by the quotient step [[0, 1], [1, −q]] in place.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public void ApplyQuotient(PolyModContext ctx, ReadOnlySpan<ulong> q)
     {
         var n0 = PolyMod.Subtract(ctx.Mod, M00, PolyMod.Multiply(ctx, q, M10));

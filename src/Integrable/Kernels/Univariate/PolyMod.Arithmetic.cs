@@ -1,8 +1,10 @@
+using System.Runtime.CompilerServices;
 namespace Integrable.Kernels.Univariate;
 
 internal static partial class PolyMod
 {
     /// <summary>a + b, trimmed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Add(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         if (a.Length < b.Length) { var t = a; a = b; b = t; }
@@ -13,6 +15,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>a − b, trimmed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Subtract(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         int n = Math.Max(a.Length, b.Length), m = Math.Min(a.Length, b.Length);
@@ -24,6 +27,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>−a.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Negate(in ModulusReducer mod, ReadOnlySpan<ulong> a)
     {
         var r = NewArray(a.Length);
@@ -32,6 +36,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>c·a for a residue c, trimmed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Scale(in ModulusReducer mod, ReadOnlySpan<ulong> a, ulong c)
     {
         if (c == 0) return [];
@@ -41,6 +46,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>dst ← c·a.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void ScaleInto(in ModulusReducer mod, ReadOnlySpan<ulong> a, ulong c, Span<ulong> dst)
     {
         if (c == 1) { a.CopyTo(dst); return; }
@@ -48,6 +54,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>a·x^k.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] ShiftLeft(ReadOnlySpan<ulong> a, int k)
     {
         if (a.IsEmpty) return [];
@@ -60,6 +67,7 @@ internal static partial class PolyMod
     public static ReadOnlySpan<ulong> ShiftRight(ReadOnlySpan<ulong> a, int k) => k >= a.Length ? [] : a[k..];
 
     /// <summary>Horner evaluation a(x).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong Evaluate(in ModulusReducer mod, ReadOnlySpan<ulong> a, ulong x)
     {
         ulong r = 0;
@@ -68,6 +76,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>The formal derivative, trimmed (coefficients i·a_i reduced mod p).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Derivative(in ModulusReducer mod, ReadOnlySpan<ulong> a)
     {
         if (a.Length <= 1) return [];
@@ -77,6 +86,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>The monic associate a / lc(a) (a non-zero).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] MakeMonic(in ModulusReducer mod, ulong[] a)
     {
         ulong lc = a[^1];
@@ -84,6 +94,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>Reversal x^(n−1)·a(1/x) of the first n coefficients (a shorter than n is padded).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Reverse(ReadOnlySpan<ulong> a, int n)
     {
         var r = new ulong[n];

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 namespace Integrable.Kernels.Univariate;
 
 internal static partial class PolyMod
@@ -5,6 +6,7 @@ internal static partial class PolyMod
     /// <summary>Quotient and remainder of a by b (b non-zero, trimmed): a = q·b + r, deg r &lt; deg b.
     /// Long division with delayed reduction for short quotients or divisors; Newton iteration for the
     /// reciprocal of the reversed divisor when both reach <see cref="UnivariateThresholds.NewtonDivision"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (ulong[] Quotient, ulong[] Remainder) DivRem(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         ulong[]? cache = null;
@@ -13,6 +15,7 @@ internal static partial class PolyMod
 
     /// <summary>As <see cref="DivRem(PolyModContext, ReadOnlySpan{ulong}, ReadOnlySpan{ulong})"/>, reusing (and
     /// extending) a cached power-series inverse of the reversed divisor between calls with the same divisor.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (ulong[] Quotient, ulong[] Remainder) DivRem(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, ref ulong[]? reciprocal)
     {
         if (b.IsEmpty) throw new DivideByZeroException("polynomial division by zero");
@@ -35,6 +38,7 @@ internal static partial class PolyMod
     /// <summary>Long division, column by column: quotient coefficient k is
     /// (a[k + lb − 1] − Σ_j q[k + j]·b[lb − 1 − j]) / lc(b), summed in 128 bits and reduced once; the
     /// remainder is the low part of a − q·b, also with delayed reduction.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (ulong[] Quotient, ulong[] Remainder) DivRemBasic(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         int la = a.Length, lb = b.Length, lq = la - lb + 1;
@@ -64,6 +68,7 @@ internal static partial class PolyMod
 
     /// <summary>The remainder a − q·b, known to have fewer than lb − 1 + 1 coefficients: only the low
     /// lb − 1 coefficients are computed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ulong[] RemainderFromQuotient(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, ReadOnlySpan<ulong> q)
     {
         int lb = b.Length, lq = q.Length;
@@ -89,6 +94,7 @@ internal static partial class PolyMod
     /// <summary>Division by Newton iteration: rev(q) = rev(a)·rev(b)⁻¹ mod x^lq, then
     /// r = a − q·b computed modulo x^L − 1 for a power of two L ≥ lb − 1 (the remainder has fewer than
     /// lb − 1 coefficients, so the wrapped product gives it exactly).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (ulong[] Quotient, ulong[] Remainder) DivRemNewton(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         int lb = b.Length, lq = a.Length - lb + 1;
@@ -100,6 +106,7 @@ internal static partial class PolyMod
 
     /// <summary>The quotient of a by a divisor with lb coefficients, given the power-series inverse of the
     /// reversed divisor to precision ≥ la − lb + 1.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] QuotientFromInverse(PolyModContext ctx, ReadOnlySpan<ulong> a, int lb, ReadOnlySpan<ulong> revInverse)
     {
         int la = a.Length, lq = la - lb + 1;
@@ -110,19 +117,25 @@ internal static partial class PolyMod
     }
 
     /// <summary>a − q·b where the result is known to have degree &lt; deg b.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] RemainderWrapped(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, ReadOnlySpan<ulong> q)
     {
         int lb = b.Length;
         if (lb <= 1) return [];
         if (q.IsEmpty) return Trim(a[..Math.Min(a.Length, lb - 1)].ToArray());
         int len = NttMultiplier.TransformLength(lb - 1);
+        var mod = ctx.Mod;
+        var r = NewArray(lb - 1);
         if (!TransformPays(ctx, Math.Max(q.Length, lb), Math.Min(q.Length, lb), len))
-            return RemainderFromQuotient(ctx.Mod, a, b, q);
+        {
+            if (len <= NttMultiplier.MaxLength) return RemainderFromQuotient(ctx.Mod, a, b, q);
+            var full = Multiply(ctx, q, b);                        // beyond the largest transform: chunked product
+            for (int i = 0; i < lb - 1; i++) r[i] = mod.Sub(i < a.Length ? a[i] : 0, i < full.Length ? full[i] : 0);
+            return Trim(r);
+        }
         var qb = NewArray(len);
         ctx.Ntt.MultiplyCyclic(q, b, len, qb);
         // Fold a mod x^len − 1 as well; the difference is r (deg r < lb − 1 ≤ len).
-        var mod = ctx.Mod;
-        var r = NewArray(lb - 1);
         for (int i = 0; i < lb - 1; i++)
         {
             ulong s = 0;
@@ -136,6 +149,7 @@ internal static partial class PolyMod
     /// <summary>The power series f⁻¹ mod x^n (f[0] ≠ 0) by Newton iteration g ← g − g·(f·g − 1), doubling
     /// the precision; with transforms the product f·g is taken cyclically at length 2k, where its
     /// wrapped part does not reach the needed coefficients k … 2k − 1.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] InverseSeries(PolyModContext ctx, ReadOnlySpan<ulong> f, int n, ulong[]? start = null)
     {
         var mod = ctx.Mod;
@@ -155,6 +169,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>One Newton step from precision k to precision k2 ≤ 2k.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ulong[] NewtonStep(PolyModContext ctx, ReadOnlySpan<ulong> f, ulong[] g, int k, int k2)
     {
         var mod = ctx.Mod;
@@ -183,6 +198,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>f⁻¹ mod x^n by the quadratic recurrence (small n).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ulong[] InverseSeriesBasic(in ModulusReducer mod, ReadOnlySpan<ulong> f, int n)
     {
         var g = new ulong[n];

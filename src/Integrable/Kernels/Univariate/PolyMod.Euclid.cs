@@ -1,9 +1,11 @@
+using System.Runtime.CompilerServices;
 namespace Integrable.Kernels.Univariate;
 
 internal static partial class PolyMod
 {
     /// <summary>In place r0 ← r0 mod r1 (row-oriented long division, suited to the short quotients of a
     /// remainder sequence); the quotient goes to q[0 … l0 − l1]. Returns the trimmed length of the remainder.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int RemainderInPlace(in ModulusReducer mod, Span<ulong> r0, int l0, ReadOnlySpan<ulong> r1, int l1, Span<ulong> q)
     {
         ulong inv = mod.Inverse(r1[l1 - 1]);
@@ -21,6 +23,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>In place m0 ← m0 − q·m1 for matrix rows (lengths tracked); returns the new trimmed length of m0.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int SubtractProductInPlace(in ModulusReducer mod, Span<ulong> m0, int l0, ReadOnlySpan<ulong> q, int lq, ReadOnlySpan<ulong> m1, int l1)
     {
         if (l1 == 0 || lq == 0) return l0;
@@ -38,12 +41,13 @@ internal static partial class PolyMod
 
     /// <summary>Euclidean steps in place, with the transition matrix when requested, until the second
     /// remainder has degree &lt; m (m = 0: to the end). Buffers are allocated once; no allocation per step.</summary>
-    private static (PolyMatrix? M, ulong[] C, ulong[] D) EuclidSteps(in ModulusReducer mod, ulong[] a, ulong[] b, int m, bool needMatrix)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static (PolyMatrix? M, ulong[] C, ulong[] D) EuclidSteps(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int m, bool needMatrix)
     {
         int la = a.Length, lb = b.Length;
-        var r0 = (ulong[])a.Clone();
+        var r0 = a.ToArray();
         var r1 = new ulong[Math.Max(la, 1)];
-        b.CopyTo(r1, 0);
+        b.CopyTo(r1);
         var q = new ulong[la];
         int cap = la + 1;
         ulong[]? m00 = null, m01 = null, m10 = null, m11 = null;

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 namespace Integrable.Kernels.Univariate;
 
@@ -5,6 +6,7 @@ internal static partial class PolyMod
 {
     /// <summary>Monic gcd of a and b (trimmed); gcd(0, 0) = 0 (empty). Plain Euclid while the larger
     /// degree is below <see cref="UnivariateThresholds.HalfGcd"/>, half-GCD reductions above.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Gcd(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         if (a.Length < b.Length) (a, b) = (b, a);
@@ -21,6 +23,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>Monic gcd by the plain Euclidean algorithm.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] GcdEuclid(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         if (a.Length < b.Length) (a, b) = (b, a);
@@ -31,6 +34,7 @@ internal static partial class PolyMod
 
     /// <summary>Monic gcd g with cofactors s, t such that s·a + t·b = g (Bézout). For a = b = 0 all
     /// three are zero; when exactly one input is zero the other is made monic.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (ulong[] G, ulong[] S, ulong[] T) ExtendedGcd(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         var mod = ctx.Mod;
@@ -72,14 +76,15 @@ internal static partial class PolyMod
     /// a div x^m, b div x^m; one explicit division step follows; the second half is computed from the
     /// top parts of the new pair shifted by k = 2m − deg. The reduced pair is recombined from the
     /// recursive result on the top part plus the matrix applied to the dropped low part only.</remarks>
-    public static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcd(PolyModContext ctx, ulong[] a, ulong[] b, bool needMatrix)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcd(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, bool needMatrix)
     {
         int n = a.Length - 1, m = (n + 1) / 2;
-        if (b.Length - 1 < m) return (needMatrix ? PolyMatrix.Identity() : null, a, b);
+        if (b.Length - 1 < m) return (needMatrix ? PolyMatrix.Identity() : null, a.ToArray(), b.ToArray());
         if (n < UnivariateThresholds.HalfGcdBase || n < 8) return HalfGcdBase(ctx, a, b, m, needMatrix);
 
         var (r, a1, b1) = HalfGcd(ctx, a[m..], b[m..], needMatrix: true);
-        var (x, y) = Recombine(ctx, r!, a1, b1, a.AsSpan(0, m), b.AsSpan(0, m), m, needMatrix, out var rTransforms);
+        var (x, y) = Recombine(ctx, r!, a1, b1, a[..m], b[..m], m, needMatrix, out var rTransforms);
         using var rT = rTransforms;
         if (y.Length - 1 < m) return (r, x, y);
         var (q, rem) = DivRem(ctx, x, y);
@@ -87,7 +92,7 @@ internal static partial class PolyMod
         (x, y) = (y, rem);
         if (y.Length - 1 < m) return (r, x, y);
         int k = 2 * m - (x.Length - 1);
-        var (s, a2, b2) = HalfGcd(ctx, x[k..], y.Length > k ? y[k..] : [], needMatrix: true);
+        var (s, a2, b2) = HalfGcd(ctx, x.AsSpan(k), y.Length > k ? y.AsSpan(k) : [], needMatrix: true);
         var (c, d) = Recombine(ctx, s!, a2, b2, x.AsSpan(0, k), y.AsSpan(0, Math.Min(k, y.Length)), k, needMatrix, out var sTransforms);
         using var sT = sTransforms;
         if (!needMatrix) return (null, c, d);
@@ -101,6 +106,7 @@ internal static partial class PolyMod
     {
         public readonly NttMultiplier.Transformed T00 = t00, T01 = t01, T10 = t10, T11 = t11;
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public void Dispose()
         {
             T00.Dispose(); T01.Dispose(); T10.Dispose(); T11.Dispose();
@@ -111,6 +117,7 @@ internal static partial class PolyMod
     /// matrix–vector products: prefixes of them are the transforms at the (shorter) product length
     /// (all of S, and R′'s first row, which is R's second row). Saves six forward transforms per half-GCD
     /// node. Returns null when the shapes do not allow it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static PolyMatrix? MatMulReusing(PolyModContext ctx, PolyMatrix s, PolyMatrix r, MatrixTransforms? sT, MatrixTransforms? rT)
     {
         if (sT is null || rT is null) return null;
@@ -144,6 +151,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>(hiA·x^k + M00·loA + M01·loB, hiB·x^k + M10·loA + M11·loB).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static (ulong[], ulong[]) Recombine(PolyModContext ctx, PolyMatrix mat, ulong[] hiA, ulong[] hiB,
         ReadOnlySpan<ulong> loA, ReadOnlySpan<ulong> loB, int k, bool keep, out MatrixTransforms? transforms)
     {
@@ -154,6 +162,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>low + high·x^k, trimmed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ulong[] AddShifted(in ModulusReducer mod, ReadOnlySpan<ulong> low, ReadOnlySpan<ulong> high, int k)
     {
         if (high.IsEmpty) return low.ToArray();
@@ -165,7 +174,8 @@ internal static partial class PolyMod
     }
 
     /// <summary>Half-GCD base case: plain Euclidean steps with matrix tracking until deg b &lt; m.</summary>
-    private static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcdBase(PolyModContext ctx, ulong[] a, ulong[] b, int m, bool needMatrix)
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcdBase(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int m, bool needMatrix)
     {
         return EuclidSteps(ctx.Mod, a, b, m, needMatrix);
     }
@@ -176,6 +186,7 @@ internal static partial class PolyMod
 
     /// <summary>As MatVec; when <paramref name="keep"/> and transforms were used, also hands back the
     /// transforms of the matrix entries (the caller disposes them).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static (ulong[], ulong[]) MatVec(PolyModContext ctx, PolyMatrix mat, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y,
         bool keep, out MatrixTransforms? transforms)
     {
@@ -192,9 +203,12 @@ internal static partial class PolyMod
         // Transform length: the smallest power of two holding the whole product, or a smaller one with the
         // vector cut into chunks of L − lenM + 1 coefficients, whichever has the lower cost
         // (4 + 4c)·L·log L (4 matrix transforms, then per chunk 2 forward and 2 inverse).
-        int len = NttMultiplier.TransformLength(lenM + lenV - 1), chunk = lenV;
-        double best = 8.0 * len * BitOperations.Log2((uint)len);
-        for (int cand = len / 2; cand >= 2 * lenM && cand >= 16; cand /= 2)
+        int full = NttMultiplier.TransformLength(lenM + lenV - 1);
+        int len = full, chunk = lenV;
+        double best = full <= NttMultiplier.MaxLength ? 8.0 * len * BitOperations.Log2((uint)len) : double.MaxValue;
+        if (2 * lenM > NttMultiplier.MaxLength)
+            return (Dot(ctx, mat.M00, x, mat.M01, y), Dot(ctx, mat.M10, x, mat.M11, y));   // beyond the transforms
+        for (int cand = Math.Min(full / 2, NttMultiplier.MaxLength); cand >= 2 * lenM && cand >= 16; cand /= 2)
         {
             int ch = cand - lenM + 1, c = (lenV + ch - 1) / ch;
             double cost = (4.0 + 4.0 * c) * cand * BitOperations.Log2((uint)cand);
@@ -236,6 +250,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>The matrix product s·r, sharing transforms when the entries are long.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static PolyMatrix MatMul(PolyModContext ctx, PolyMatrix s, PolyMatrix r)
     {
         int small = Math.Min(MinEntry(s), MinEntry(r));
@@ -247,6 +262,10 @@ internal static partial class PolyMod
         int n = Math.Max(Math.Max(s.M00.Length, s.M01.Length), Math.Max(s.M10.Length, s.M11.Length))
               + Math.Max(Math.Max(r.M00.Length, r.M01.Length), Math.Max(r.M10.Length, r.M11.Length)) - 1;
         int len = NttMultiplier.TransformLength(n);
+        if (len > NttMultiplier.MaxLength)
+            return new PolyMatrix(
+                Dot(ctx, s.M00, r.M00, s.M01, r.M10), Dot(ctx, s.M00, r.M01, s.M01, r.M11),
+                Dot(ctx, s.M10, r.M00, s.M11, r.M10), Dot(ctx, s.M10, r.M01, s.M11, r.M11));
         long terms = 2L * Math.Min(s.MaxLength, r.MaxLength);
         int kp = ntt.PrimesFor(terms);
         using var s00 = ntt.Transform(s.M00, len, kp);
@@ -269,6 +288,7 @@ internal static partial class PolyMod
         return new PolyMatrix(Entry(s00, r00, s01, r10), Entry(s00, r01, s01, r11), Entry(s10, r00, s11, r10), Entry(s10, r01, s11, r11));
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int MinEntry(PolyMatrix m)
     {
         int r = int.MaxValue;
@@ -286,6 +306,7 @@ internal static partial class PolyMod
         a.IsEmpty || b.IsEmpty ? 0 : a.Length + b.Length - 1;
 
     /// <summary>a1·b1 + a2·b2, trimmed.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static ulong[] Dot(PolyModContext ctx, ReadOnlySpan<ulong> a1, ReadOnlySpan<ulong> b1, ReadOnlySpan<ulong> a2, ReadOnlySpan<ulong> b2)
     {
         var p1 = Multiply(ctx, a1, b1);
@@ -294,6 +315,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>res(a, b) along the Euclidean remainder sequence (0 when either is zero).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong Resultant(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         var mod = ctx.Mod;

@@ -17,6 +17,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>The trimmed array itself, or a trimmed copy.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Trim(ulong[] a)
     {
         int n = TrimmedLength(a);
@@ -30,6 +31,7 @@ internal static partial class PolyMod
     // ---------------------------------------------------------------- products
 
     /// <summary>The product a·b as a trimmed array.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Multiply(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
         if (a.IsEmpty || b.IsEmpty) return [];
@@ -44,6 +46,7 @@ internal static partial class PolyMod
     /// L the transform length) is below that of the classical product, la·lb scaled by the Karatsuba saving
     /// (Karatsuba/lb)^0.415 once the shorter operand reaches <see cref="UnivariateThresholds.Karatsuba"/>.
     /// The constants come from timing all three on a 2-core AMD EPYC (UnivariateMultiplyBenchmarks).</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void Multiply(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
     {
         if (a.Length < b.Length) { var t = a; a = b; b = t; }
@@ -55,16 +58,18 @@ internal static partial class PolyMod
             return;
         }
         bool kara = lb >= UnivariateThresholds.Karatsuba;
-        if (TransformPays(ctx, la, lb, NttMultiplier.TransformLength(la + lb - 1))) ctx.Ntt.Multiply(a, b, dst);
+        int len = NttMultiplier.TransformLength(la + lb - 1);
+        if (len > NttMultiplier.MaxLength || TransformPays(ctx, la, lb, len)) ctx.Ntt.Multiply(a, b, dst);   // (chunked beyond the largest transform)
         else if (kara) MultiplyKaratsuba(ctx.Mod, a, b, dst);
         else MultiplySchoolbook(ctx.Mod, a, b, dst);
     }
 
     /// <summary>The cost model of <see cref="Multiply(PolyModContext, ReadOnlySpan{ulong}, ReadOnlySpan{ulong}, Span{ulong})"/>:
     /// true when transforms of length <paramref name="len"/> beat the classical product of lengths la ≥ lb.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TransformPays(PolyModContext ctx, int la, int lb, int len)
     {
-        if (lb < UnivariateThresholds.Ntt) return false;
+        if (lb < UnivariateThresholds.Ntt || len > NttMultiplier.MaxLength) return false;
         double transformCost = UnivariateThresholds.TransformCostFactor * ctx.Ntt.PrimesFor(lb) * len * System.Numerics.BitOperations.Log2((uint)len);
         bool kara = lb >= UnivariateThresholds.Karatsuba;
         double classicalCost = (double)la * lb * (kara ? Math.Pow((double)UnivariateThresholds.Karatsuba / lb, 0.415) : 1.0);
@@ -73,6 +78,7 @@ internal static partial class PolyMod
 
     /// <summary>dst ← a·b by the quadratic method with delayed (128-bit) reduction: one reduction per
     /// output coefficient.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void MultiplySchoolbook(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
     {
         int la = a.Length, lb = b.Length, n = la + lb - 1;
@@ -94,6 +100,7 @@ internal static partial class PolyMod
 
     /// <summary>dst ← a·b by Karatsuba's method (a at least as long as b); an unbalanced product is cut
     /// into blocks of b's length.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void MultiplyKaratsuba(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst)
     {
         int la = a.Length, lb = b.Length;
@@ -120,6 +127,7 @@ internal static partial class PolyMod
     }
 
     /// <summary>Karatsuba on two operands of equal length n; dst has length 2n − 1; scratch ≥ 4n + 64.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void KaratsubaEqual(in ModulusReducer mod, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> dst, Span<ulong> scratch)
     {
         int n = a.Length;
@@ -155,6 +163,7 @@ internal static partial class PolyMod
     public static ulong[] Square(PolyModContext ctx, ReadOnlySpan<ulong> a) => Multiply(ctx, a, a);
 
     /// <summary>dst ← (a·b) mod x^n, as a trimmed array of length ≤ n.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] MultiplyLow(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, int n)
     {
         a = a[..Math.Min(a.Length, n)];

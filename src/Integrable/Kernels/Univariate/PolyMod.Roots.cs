@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 
 namespace Integrable.Kernels.Univariate;
@@ -6,6 +7,7 @@ internal static partial class PolyMod
 {
     /// <summary>base^e mod m (m of degree ≥ 1, trimmed) by square and multiply; the reversed reciprocal
     /// of m is computed once when Newton division pays off.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] PowMod(PolyModContext ctx, ulong[] b, BigInteger e, ulong[] m)
     {
         if (m.Length == 0) throw new DivideByZeroException("reduction modulo the zero polynomial");
@@ -24,6 +26,7 @@ internal static partial class PolyMod
 
     /// <summary>The distinct roots of f in Z/pZ, sorted (f non-zero). Uses gcd(f, x^p − x) and
     /// Cantor–Zassenhaus splitting gcd(g, (x + δ)^((p−1)/2) − 1) with a fixed-seed generator.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong[] Roots(PolyModContext ctx, ulong[] f)
     {
         var mod = ctx.Mod;
@@ -49,6 +52,7 @@ internal static partial class PolyMod
         return roots.ToArray();
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void SplitLinear(PolyModContext ctx, ulong[] g, Random rng, List<ulong> roots)
     {
         var mod = ctx.Mod;
@@ -92,6 +96,7 @@ internal sealed class PolyReducer
     }
 
     /// <summary>a mod m for deg a ≤ 2·deg m − 2 (any a when long division is used).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public ulong[] Reduce(ulong[] a)
     {
         if (a.Length < _m.Length) return a;

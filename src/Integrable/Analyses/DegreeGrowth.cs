@@ -12,7 +12,7 @@ namespace Integrable.Analyses;
 /// its degree max(deg num, deg den) equals d_n unless the line is special. Two independent lines run in
 /// lockstep; when they disagree at a step, further lines recomputed from the start decide (the step is
 /// redone). Parameters without a value are given random values on each line (generic parameters).
-/// The first degrees are also confirmed by exact iterates where these are cheap Laurent polynomials.</para>
+/// The first degrees are also confirmed by exact iterates (reduced rational functions over Q) while these are cheap.</para>
 /// <para>Integrable maps have polynomial growth (quadratic for QRT maps and discrete Painlevé
 /// equations), non-integrable ones exponential growth: M. Bellon, C.-M. Viallet, "Algebraic entropy",
 /// Comm. Math. Phys. 204 (1999) 425–437; J. Hietarinta, C. Viallet, PRL 81 (1998) 325.</para>

@@ -23,7 +23,7 @@ public sealed record GrowthOptions
     /// <summary>Extra degrees that must confirm the fitted generating function (default 5).</summary>
     public int MinimumConfirmations { get; init; } = Guessing.GuessDefaults.MinimumConfirmations;
 
-    /// <summary>Whether to confirm the first degrees by exact iterates (Laurent polynomials over Q) where cheap.</summary>
+    /// <summary>Whether to confirm the first degrees by exact iterates (reduced rational functions over Q) where cheap.</summary>
     public bool ExactConfirmation { get; init; } = true;
 
     /// <summary>Index of the first initial value (matters for non-autonomous equations).</summary>

@@ -59,7 +59,7 @@ public sealed class GrowthReport : IAnalysisReport
     /// <summary>Steps at which the two lines disagreed and a fresh line decided.</summary>
     public ImmutableArray<int> RedoneSteps { get; }
 
-    /// <summary>How many leading degrees were also confirmed by exact iterates (Laurent polynomials over Q).</summary>
+    /// <summary>How many leading degrees (initial values included) were also confirmed by exact iterates (reduced rational functions over Q).</summary>
     public int ExactlyConfirmed { get; }
 
     /// <summary>A disagreement between an exact degree and the line degrees (null when none; should never happen).</summary>
@@ -82,7 +82,7 @@ public sealed class GrowthReport : IAnalysisReport
             var sb = new StringBuilder();
             sb.Append(CultureInfo.InvariantCulture, $"degrees measured on random lines modulo primes ({string.Join(", ", Primes)}), two independent lines agreeing at every step");
             if (RedoneSteps.Length > 0) sb.Append(CultureInfo.InvariantCulture, $" (steps {string.Join(", ", RedoneSteps)} decided by a further line)");
-            if (ExactlyConfirmed > 0) sb.Append(CultureInfo.InvariantCulture, $"; the first {ExactlyConfirmed} degrees confirmed by exact Laurent iterates over Q");
+            if (ExactlyConfirmed > 0) sb.Append(CultureInfo.InvariantCulture, $"; the first {ExactlyConfirmed} degrees confirmed by exact iterates (reduced rational functions over Q)");
             if (ExactMismatch is not null) sb.Append("; WARNING: ").Append(ExactMismatch);
             sb.Append("; ").Append(Fit.IsFound
                 ? $"generating function determined by {Fit.TermsUsed} degrees and confirmed by {Fit.TermsConfirmed} more (evidence, not proof)"

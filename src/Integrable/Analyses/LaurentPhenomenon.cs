@@ -284,7 +284,7 @@ public static class LaurentPhenomenon
         var names = initial.Select(p => Name(p.Item1, p.Item2, H(p.Item1, p.Item2))).ToArray();
         var ring = new LaurentPolynomialRing(names);
         var clock = new BudgetClock(options.Budget, cancellation);
-        var metered = new MeteredLaurentRing(ring, clock);
+        var metered = new MeteredRing<LaurentPolynomial>(ring, clock, p => p.TermCount);
         var memo = new Dictionary<(int, int, int), LaurentPolynomial>();
         var found = ImmutableArray.CreateBuilder<LaurentStep>();
         LaurentFailure? failure = null;
@@ -356,7 +356,7 @@ public static class LaurentPhenomenon
         var names = Enumerable.Range(1, matrix.RowCount).Select(i => TermName("x", i)).ToArray();
         var ring = new LaurentPolynomialRing(names);
         var clock = new BudgetClock(options.Budget, cancellation);
-        var metered = new MeteredLaurentRing(ring, clock);
+        var metered = new MeteredRing<LaurentPolynomial>(ring, clock, p => p.TermCount);
         var seed = new Seed<LaurentPolynomial>(metered, matrix, Enumerable.Range(0, matrix.RowCount).Select(ring.Variable));
         var primes = new int[matrix.MutableCount];
         var found = ImmutableArray.CreateBuilder<LaurentStep>();
@@ -495,7 +495,7 @@ public static class LaurentPhenomenon
     /// division is not exact, as fractions N/D of Laurent polynomials.</summary>
     internal sealed class Engine(LaurentPolynomialRing ring, BudgetClock clock)
     {
-        private readonly MeteredLaurentRing _laurent = new(ring, clock);
+        private readonly MeteredRing<LaurentPolynomial> _laurent = new(ring, clock, p => p.TermCount);
         private readonly LaurentFractionRing _fractions = new(ring, clock);
 
         public Outcome[] Evaluate(StraightLineProgram rule, LaurentPolynomial[] input)

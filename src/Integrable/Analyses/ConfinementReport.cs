@@ -72,11 +72,12 @@ public sealed class ConfinementReport : IAnalysisReport
         if (Parameters.Length > 0)
             sb.Append("parameters: ").AppendLine(string.Join(", ", Parameters.Select((p, i) => $"{p} = {ParameterValues[i]}")));
         if (Singularities.Length == 0)
-            sb.Append("no singular value among ").Append(string.Join(", ", Candidates)).Append(" leads to an infinite term within ").Append(Steps).AppendLine(" steps");
+            sb.Append("no singular value among ").Append(string.Join(", ", Candidates)).Append(" leads to an infinite term within ").Append(Steps)
+              .AppendLine(" steps (only rational singular values are tried; give parameter values that make the others rational)");
         foreach (var s in Singularities)
         {
             sb.Append("x = ").Append(s.SingularValue).Append(" + ε (free data ").Append(string.Join(", ", s.FreeData)).Append("): pattern ")
-              .Append(s.PatternText).Append(", ").AppendLine(s.IsConfined ? $"confined at {s.Terms[s.PatternLength].Term}" : "NOT confined");
+              .Append(s.PatternText).Append(", ").AppendLine(s.Verdict);
             sb.Append("  ").AppendLine(s.Reason);
             foreach (var e in s.Terms) sb.Append("  ").AppendLine(ReportJson.Shorten(e.ToString(), 200));
         }
@@ -98,7 +99,7 @@ public sealed class ConfinementReport : IAnalysisReport
 
     /// <summary>Writes <c>confined</c> (all singularities confined), <c>singularities</c> (each with
     /// <c>value</c>, <c>pattern</c> (symbols such as "0", "∞^2", "f" for a regular term), <c>confined</c>,
-    /// <c>confinedAt</c> (index of the first regular term after the pattern, or null), <c>length</c>,
+    /// <c>confinedAt</c> (index of the first regular term after the pattern, or null), <c>length</c>, <c>cyclic</c>,
     /// <c>recoversInitialData</c>, <c>precision</c>, <c>freeData</c>, <c>reason</c>, <c>terms</c> with
     /// <c>n</c>, <c>term</c>, <c>valuation</c>, <c>leading</c>, <c>symbol</c>), <c>candidates</c>,
     /// <c>steps</c>, <c>parameters</c>, <c>limit</c> and <c>verification</c>.</summary>
@@ -118,6 +119,7 @@ public sealed class ConfinementReport : IAnalysisReport
             writer.WriteBoolean("confined", s.IsConfined);
             if (s.ConfinedAt is { } c) writer.WriteNumber("confinedAt", c); else writer.WriteNull("confinedAt");
             writer.WriteNumber("length", s.PatternLength);
+            writer.WriteBoolean("cyclic", s.IsCyclic);
             writer.WriteBoolean("recoversInitialData", s.RecoversInitialData);
             writer.WriteNumber("precision", s.Precision);
             writer.WriteStartArray("freeData");

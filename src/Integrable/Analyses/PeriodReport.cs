@@ -60,7 +60,7 @@ public sealed class PeriodReport : IAnalysisReport
     /// <inheritdoc/>
     public BudgetLimit Limit { get; }
 
-    /// <summary>Why the budget limited the check, or null.</summary>
+    /// <summary>Why the exact symbolic check stopped (the answer is then verified probabilistically), or null.</summary>
     public string? LimitMessage { get; }
 
     /// <summary>Wall time spent.</summary>
@@ -78,7 +78,7 @@ public sealed class PeriodReport : IAnalysisReport
             return Method == PeriodVerification.Symbolic
                 ? found + "x_(n+p) = x_n verified as an exact identity of rational functions" + scope
                 : found + $"identity tested probabilistically: degree bound {DegreeBound:G4}, error probability ≤ {ErrorBound:G3}" +
-                  (Limit != BudgetLimit.None ? $" (the symbolic check stopped: {LimitMessage})" : "") + scope;
+                  (LimitMessage is not null ? $" (the symbolic check stopped: {LimitMessage})" : "") + scope;
         }
     }
 

@@ -141,8 +141,10 @@ public static class Periodicity
             double bound = DegreeBoundOf(map, free.Length, p);
             double perPoint = 1.0;
             foreach (var f in fields) perPoint *= Math.Min(1.0, bound / (f.Modulus - bound));
+            // A budget that stopped the symbolic check only weakens the verification, not the answer:
+            // the report keeps Limit = None and says why the check is probabilistic.
             return new PeriodReport(map.Text, p, maxPeriod, PeriodVerification.Probabilistic, perPoint, bound, options.Points, rationalPoints,
-                map.IsAutonomous, limit, limitMessage, clock.Elapsed);
+                map.IsAutonomous, BudgetLimit.None, limitMessage, clock.Elapsed);
         }
         return new PeriodReport(map.Text, null, maxPeriod, PeriodVerification.Counterexamples, null, null, options.Points, 0,
             map.IsAutonomous, BudgetLimit.None, null, clock.Elapsed);

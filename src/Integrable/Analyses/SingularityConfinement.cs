@@ -104,6 +104,21 @@ public static class SingularityConfinement
                 if (Enumerable.Range(i, k).All(j => terms[j].IsRegular)) { recovery = i; break; }
             if (recovery < 0)
             {
+                // A cyclic pattern: the orbit comes back to the singular initial state (free data u, then s + O(ε)),
+                // as for periodic maps; nothing is lost, but the singularity recurs.
+                for (int j = Math.Max(k - 1, 1); j < terms.Length; j++)
+                {
+                    if (terms[j].IsInfinite || terms[j].Limit != s || terms[j].Order != terms[0].Order) continue;
+                    bool back = true;
+                    for (int m = 0; m < k - 1 && back; m++)
+                    {
+                        int i = j - (k - 1) + m;
+                        back = i >= 0 && !terms[i].IsInfinite && terms[i].Limit == u1[m];
+                    }
+                    if (back)
+                        return new SingularityPattern(s, terms, j, true, true, precision, [.. u1],
+                            $"cyclic: after {j} steps the orbit is back at the singular initial state (free data and x = {s} + O(ε)); the pattern repeats and no initial data are lost", j);
+                }
                 int last = terms.Length;
                 return new SingularityPattern(s, terms, last, false, false, precision, [.. u1],
                     $"no {k} consecutive regular terms within {options.Steps} steps after the singular term");

@@ -12,8 +12,9 @@ namespace Integrable.Analyses;
 public sealed class SingularityPattern
 {
     internal SingularityPattern(Rational singularValue, ImmutableArray<SingularityEntry> terms, int patternLength, bool confined,
-        bool recovers, int precision, ImmutableArray<Rational> freeData, string reason)
+        bool recovers, int precision, ImmutableArray<Rational> freeData, string reason, int? cycleLength = null)
     {
+        CycleLength = cycleLength;
         SingularValue = singularValue;
         Terms = terms;
         PatternLength = patternLength;
@@ -36,13 +37,22 @@ public sealed class SingularityPattern
     /// <summary>The pattern: the first <see cref="PatternLength"/> terms.</summary>
     public ImmutableArray<SingularityEntry> Pattern => Terms[..Math.Min(PatternLength, Terms.Length)];
 
-    /// <summary>True when, after the pattern, a full state of regular terms follows that depends on the free initial data.</summary>
+    /// <summary>For a cyclic pattern (the orbit returns to the singular initial state, as for periodic maps): the
+    /// number of steps until it does; otherwise null.</summary>
+    public int? CycleLength { get; }
+
+    /// <summary>True for a cyclic pattern (see <see cref="CycleLength"/>).</summary>
+    public bool IsCyclic => CycleLength is not null;
+
+    /// <summary>True when, after the pattern, a full state of regular terms follows that depends on the free
+    /// initial data, or when the pattern is cyclic (the orbit returns to its singular initial state).</summary>
     public bool IsConfined { get; }
 
     /// <summary>True when the regular state after the pattern depends on the free initial data (it changes when they change).</summary>
     public bool RecoversInitialData { get; }
 
-    /// <summary>The index of the first regular term after the pattern, or null when not confined.</summary>
+    /// <summary>The index of the first regular term after the pattern (for a cyclic pattern: of the term where
+    /// the orbit is back at the singular state), or null when not confined.</summary>
     public long? ConfinedAt => IsConfined ? Terms[PatternLength].Index : null;
 
     /// <summary>The relative precision (number of ε-terms) of the series used.</summary>
@@ -59,5 +69,8 @@ public sealed class SingularityPattern
 
     /// <summary>Text such as <c>x = 0 + ε: pattern {0, ∞^2, 0}, confined at x_4</c>.</summary>
     /// <returns>The text.</returns>
-    public override string ToString() => $"x = {SingularValue} + ε: pattern {PatternText}, {(IsConfined ? $"confined at {Terms[PatternLength].Term}" : "not confined")}";
+    public override string ToString() => $"x = {SingularValue} + ε: pattern {PatternText}, {Verdict}";
+
+    internal string Verdict => IsCyclic ? $"cyclic (back at the singular state at {Terms[PatternLength].Term})"
+        : IsConfined ? $"confined at {Terms[PatternLength].Term}" : "NOT confined";
 }

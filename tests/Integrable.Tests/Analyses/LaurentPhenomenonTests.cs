@@ -191,6 +191,19 @@ public class LaurentPhenomenonTests
     }
 
     [Fact]
+    public void Check_TSystemTypeA2_BoundaryOnes_LaurentPositive()
+    {
+        // The A_r T-system with T_{0,n} = T_{r+1,n} = 1 has Laurent solutions with positive coefficients in
+        // any admissible initial data (Di Francesco–Kedem, "Q-systems, heaps, paths and cluster positivity",
+        // Comm. Math. Phys. 293 (2010); for the T-system: Di Francesco–Kedem 2013).
+        var t = LatticeRecurrence.Parse("T_{a,n+1} T_{a,n-1} = T_{a,n}^2 + T_{a+1,n} T_{a-1,n}");
+        var report = LaurentPhenomenon.Check(t, 6, space: 1, spaceRange: (1, 2));
+        Assert.True(report.IsLaurent && report.AllPositive);
+        Assert.All(report.Variables, v => Assert.Matches(@"^T_\{[12],[01]\}$", v));
+        Assert.Throws<ArgumentOutOfRangeException>(() => LaurentPhenomenon.Check(t, 6, space: 3, spaceRange: (1, 2)));
+    }
+
+    [Fact]
     public void Check_Octahedron_PowersOfTwoAllCoefficientsOne()
     {
         // Speyer, "Perfect matchings and the octahedron recurrence", J. Algebraic Combin. 25 (2007):

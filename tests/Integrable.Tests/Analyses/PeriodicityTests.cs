@@ -62,6 +62,18 @@ public class PeriodicityTests
     }
 
     [Fact]
+    public void Find_SymbolicCheckOverBudget_FallsBackToProbabilistic()
+    {
+        // Todd's 8-cycle with a tiny term budget: the exact check stops, the period stands with an error bound.
+        var report = Periodicity.Find(Recurrence.Parse("x_{n+3} x_n = 1 + x_{n+1} + x_{n+2}"), 10,
+            new PeriodOptions { Budget = AnalysisBudget.Default with { MaxTerms = 5 } });
+        Assert.Equal(8, report.Period);
+        Assert.Equal(PeriodVerification.Probabilistic, report.Method);
+        Assert.Equal(BudgetLimit.None, report.Limit);
+        Assert.Contains("symbolic check stopped", report.Verification);
+    }
+
+    [Fact]
     public void Find_System_LynessAsSystem()
     {
         var report = Periodicity.Find(RecurrenceSystem.Parse("x_{n+1} = y_n, y_{n+1} x_n = y_n + 1"), 12);

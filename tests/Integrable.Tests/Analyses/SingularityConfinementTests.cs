@@ -59,6 +59,31 @@ public class SingularityConfinementTests(ITestOutputHelper output)
     }
 
     [Fact]
+    public void Test_Lyness_CyclicPattern()
+    {
+        // Lyness x_{n+1} x_{n-1} = x_n + 1 has period 5, so the orbit through x = ε returns to it:
+        // x_1 = ε, x_2 = (1 + ε)/u, x_3 ~ 1/ε, x_4 ~ 1/ε, x_5 finite, x_6 = ε (common knowledge from the 5-cycle).
+        var report = SingularityConfinement.Test(Recurrence.Parse("x_{n+1} x_{n-1} = x_n + 1"));
+        var p = report.Singularities[0];
+        Assert.True(p.IsCyclic);
+        Assert.Equal(5, p.CycleLength);
+        Assert.Equal(["0", "f", "∞", "∞", "f"], p.Pattern.Select(e => e.Symbol).ToArray());
+        Assert.True(report.IsConfined);
+    }
+
+    [Fact]
+    public void Test_RationalRootsOnlyWhenParametersMakeThemRational()
+    {
+        // x_{n+1} + x_{n-1} = (a x_n + b)/(x_n^2 - c): singular at x_n = ±√c; with c = 4 they are ±2.
+        var report = SingularityConfinement.Test(Recurrence.Parse("x_{n+1} + x_{n-1} = (a x_n + b)/(x_n^2 - c)"),
+            new ConfinementOptions { ParameterValues = new Dictionary<string, Rational> { ["c"] = 4 } });
+        Assert.Contains(new Rational(2), report.Candidates);
+        Assert.Contains(new Rational(-2), report.Candidates);
+        Assert.True(report.IsConfined);
+        Assert.Equal(2, report.Singularities.Length);
+    }
+
+    [Fact]
     public void Test_DetectsNonZeroSingularValue()
     {
         // x_{n+1} = x_{n-1} + 1/(x_n - 1): the denominator vanishes at x_n = 1.

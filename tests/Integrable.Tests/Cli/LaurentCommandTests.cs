@@ -24,6 +24,21 @@ public class LaurentCommandTests
         Assert.True(steps[0].GetProperty("integer").GetBoolean());
     }
 
+    [Theory]
+    [InlineData("x_{n+5} x_n = x_{n+4} x_{n+1} + x_{n+3} x_{n+2}")]
+    [InlineData("x_{n+6} x_n = x_{n+5} x_{n+1} + x_{n+4} x_{n+2} + x_{n+3}^2")]
+    [InlineData("x_{n+7} x_n = x_{n+6} x_{n+1} + x_{n+5} x_{n+2} + x_{n+4} x_{n+3}")]
+    public void Json_Somos5To7_Laurent(string equation)
+    {
+        // Somos-5, 6, 7 are Laurent with integer coefficients (Fomin–Zelevinsky, The Laurent phenomenon, 2002).
+        var (exit, stdout, _) = Run("laurent", equation, "--steps", "9", "--json");
+        Assert.Equal(0, exit);
+        var root = JsonDocument.Parse(stdout).RootElement;
+        Assert.True(root.GetProperty("laurent").GetBoolean());
+        Assert.True(root.GetProperty("integer").GetBoolean());
+        Assert.Equal(9, root.GetProperty("steps").GetArrayLength());
+    }
+
     [Fact]
     public void Json_Somos8_FirstFailure16()
     {

@@ -26,8 +26,8 @@ internal static class UnivariateThresholds
     internal static int NewtonDivision = 400;
 
     /// <summary>Half-GCD replaces the plain Euclidean algorithm at this degree of the larger operand.</summary>
-    internal static int HalfGcd = 200;
+    internal static int HalfGcd = 600;
 
     /// <summary>Degree below which the half-GCD recursion falls back to plain Euclidean steps with matrix tracking.</summary>
-    internal static int HalfGcdBase = 100;
+    internal static int HalfGcdBase = 200;
 }

@@ -91,7 +91,8 @@ internal sealed class PolyReducer
     {
         _ctx = ctx;
         _m = m;
-        if (m.Length - 1 >= UnivariateThresholds.NewtonDivision)
+        long d = m.Length - 1;
+        if (d >= UnivariateThresholds.NewtonDivision && d * d >= UnivariateThresholds.NewtonDivisionWork)
             _revInverse = PolyMod.InverseSeries(ctx, PolyMod.Reverse(m, m.Length), m.Length - 1);
     }
 

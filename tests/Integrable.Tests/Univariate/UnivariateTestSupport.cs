@@ -5,13 +5,6 @@ using Integrable.Univariate;
 
 namespace Integrable.Tests.Univariate;
 
-/// <summary>Tests that change the static algorithm thresholds run in this collection, one at a time.</summary>
-[CollectionDefinition(Name, DisableParallelization = true)]
-public sealed class ThresholdCollection
-{
-    public const string Name = "Univariate thresholds";
-}
-
 /// <summary>Sets the univariate thresholds for the lifetime of the scope and restores them afterwards.</summary>
 internal sealed class ThresholdScope : IDisposable
 {

@@ -44,6 +44,28 @@ internal static partial class PolyMod
             for (; i < n && i - 1 < ls; i++) dst[i] = mod.Reduce64(dst[i] + n1 * src[i - 1]);
             return;
         }
+        if (!oneWord && lq <= 4)
+        {
+            // Large p with a short quotient: Shoup products by the fixed factor p − q[k] with the
+            // precomputed quotient ⌊(p − q[k])·2^64/p⌋ (one high and two low multiplications per term)
+            // beat a 128-bit sum whose final reduction needs three reductions once the high word is set.
+            for (int k = 0; k < lq; k++)
+            {
+                ulong w = nq[k];
+                if (w == 0) continue;
+                ulong wq = (ulong)(((UInt128)w << 64) / p);
+                int iEnd = Math.Min(n, ls + k);
+                for (int i = k; i < iEnd; i++)
+                {
+                    ulong x = src[i - k];
+                    ulong r = x * w - Math.BigMul(x, wq, out _) * p;     // x·w mod p, in [0, 2p)
+                    r -= p;
+                    r += p & (ulong)((long)r >> 63);
+                    dst[i] = mod.Add(dst[i], r);
+                }
+            }
+            return;
+        }
         for (int i = 0; i < n; i++)
         {
             int k0 = Math.Max(0, i - ls + 1), k1 = Math.Min(i, lq - 1);

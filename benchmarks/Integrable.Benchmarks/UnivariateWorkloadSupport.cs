@@ -28,10 +28,12 @@ internal static class UnivariateWorkloadSupport
         return PolynomialModP.FromCoefficients(f, c);
     }
 
-    /// <summary>Median wall time and the mean process CPU time per repetition (after one warm-up).</summary>
+    /// <summary>Median wall time and the mean process CPU time per repetition, after a warm-up of at
+    /// least one call and up to 50 calls or half a second (so that tiered compilation has settled).</summary>
     public static (double Wall, double Cpu) Measure(int reps, Action action)
     {
-        action();
+        var warm = Stopwatch.StartNew();
+        for (int i = 0; i < 50 && (i == 0 || warm.Elapsed.TotalSeconds < 0.5); i++) action();
         var cpu0 = Process.GetCurrentProcess().TotalProcessorTime;
         double wall = Timing.Median(reps, action, warmup: false);
         double cpu = (Process.GetCurrentProcess().TotalProcessorTime - cpu0).TotalSeconds / reps;

@@ -60,7 +60,7 @@ public sealed partial class PolynomialModP
     /// <param name="a">First polynomial.</param>
     /// <param name="b">Second polynomial.</param>
     /// <returns>gcd(<paramref name="a"/>, <paramref name="b"/>), monic or zero.</returns>
-    /// <remarks>Euclid below degree 200, half-GCD above (O(M(n) log n)).</remarks>
+    /// <remarks>Euclid below degree 600, half-GCD above (O(M(n) log n)).</remarks>
     /// <exception cref="Algebra.IncompatibleRingException">The fields differ.</exception>
     public static PolynomialModP Gcd(PolynomialModP a, PolynomialModP b)
     {

@@ -8,6 +8,9 @@ namespace Integrable.Univariate;
 /// <summary>Shared text handling for the univariate types: terms <c>c*x^k</c> joined by <c>+</c>/<c>-</c>.</summary>
 internal static class UnivariateText
 {
+    /// <summary>Largest exponent accepted by the parser (dense storage: the degree fixes the array length).</summary>
+    public const int MaxExponent = 1 << 28;
+
     /// <summary>Parses a sum of terms such as <c>3*x^2 - x/2 + 1/3</c> or <c>-2/3*t + 5</c>; repeated
     /// exponents are added. Returns (coefficient, exponent) pairs.</summary>
     public static List<(Rational Coefficient, int Exponent)> ParseTerms(string text, string variable)
@@ -66,7 +69,7 @@ internal static class UnivariateText
                     SkipSpaces();
                     if (i == n || !char.IsAsciiDigit(text[i])) throw Error("expected an exponent");
                     var e = ParseNumber(ref i);
-                    if (!e.IsInteger || e > int.MaxValue - 1) throw Error("exponent too large");
+                    if (e > MaxExponent) throw Error($"exponent above {MaxExponent}");
                     exponent = (int)(long)e;
                 }
                 SkipSpaces();

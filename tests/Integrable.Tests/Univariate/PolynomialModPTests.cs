@@ -122,6 +122,7 @@ public class PolynomialModPTests
         Assert.Equal(PolynomialModP.FromCoefficients(F101, [F101.Inverse(2)]), PolynomialModP.Parse(F101, "1/2"));
         Assert.Throws<FormatException>(() => PolynomialModP.Parse(F101, "3*y"));
         Assert.Throws<FormatException>(() => PolynomialModP.Parse(F101, "3 x"));
+        Assert.Throws<FormatException>(() => PolynomialModP.Parse(F101, "x^99999999999"));
         Assert.Throws<DivideByZeroException>(() => PolynomialModP.Parse(F101, "1/101"));
     }
 

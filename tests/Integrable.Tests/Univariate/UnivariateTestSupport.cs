@@ -5,13 +5,6 @@ using Integrable.Univariate;
 
 namespace Integrable.Tests.Univariate;
 
-/// <summary>Tests that change the static algorithm thresholds run in this collection, one at a time.</summary>
-[CollectionDefinition(Name, DisableParallelization = true)]
-public sealed class ThresholdCollection
-{
-    public const string Name = "Univariate thresholds";
-}
-
 /// <summary>Sets the univariate thresholds for the lifetime of the scope and restores them afterwards.</summary>
 internal sealed class ThresholdScope : IDisposable
 {
@@ -20,6 +13,7 @@ internal sealed class ThresholdScope : IDisposable
         _hbase = UnivariateThresholds.HalfGcdBase, _qmul = UnivariatePolynomial.ModularMultiplyThreshold,
         _zmul = IntegerPoly.ModularProductThreshold, _mat = UnivariateThresholds.MatrixTransform;
     private readonly double _factor = UnivariateThresholds.TransformCostFactor;
+    private readonly long _newtonWork = UnivariateThresholds.NewtonDivisionWork;
     private readonly int _maxLen = NttMultiplier.MaxLength;
     private readonly bool _vector = NttPrime.AllowVector, _vector512 = NttPrime.AllowVector512, _forceZ = IntegerPoly.ForceModularProduct;
 
@@ -33,7 +27,7 @@ internal sealed class ThresholdScope : IDisposable
         if (transformCostFactor is double tf) UnivariateThresholds.TransformCostFactor = tf;
         if (karatsuba is int k) UnivariateThresholds.Karatsuba = k;
         if (ntt is int n) UnivariateThresholds.Ntt = n;
-        if (newton is int d) UnivariateThresholds.NewtonDivision = d;
+        if (newton is int d) { UnivariateThresholds.NewtonDivision = d; UnivariateThresholds.NewtonDivisionWork = d; }
         if (halfGcd is int h) UnivariateThresholds.HalfGcd = h;
         if (halfGcdBase is int hb) UnivariateThresholds.HalfGcdBase = hb;
         if (vector is bool v) NttPrime.AllowVector = v;
@@ -46,6 +40,7 @@ internal sealed class ThresholdScope : IDisposable
         UnivariateThresholds.Karatsuba = _kara;
         UnivariateThresholds.Ntt = _ntt;
         UnivariateThresholds.NewtonDivision = _newton;
+        UnivariateThresholds.NewtonDivisionWork = _newtonWork;
         UnivariateThresholds.HalfGcd = _hgcd;
         UnivariateThresholds.HalfGcdBase = _hbase;
         NttPrime.AllowVector = _vector;

@@ -100,6 +100,20 @@ internal readonly struct ModulusReducer
     {
         a %= P;
         if (a == 0) throw new DivideByZeroException($"zero has no inverse modulo {P}");
+        if (P <= uint.MaxValue)
+        {
+            // 32-bit divisions are several times cheaper than 64-bit ones.
+            long t32 = 0, nt32 = 1;
+            uint r32 = (uint)P, nr32 = (uint)a;
+            while (nr32 != 0)
+            {
+                uint q = r32 / nr32;
+                (r32, nr32) = (nr32, r32 - q * nr32);
+                (t32, nt32) = (nt32, t32 - q * nt32);
+            }
+            if (r32 != 1) throw new ArithmeticException($"{a} is not invertible modulo {P}");
+            return t32 < 0 ? (ulong)(t32 + (long)P) : (ulong)t32;
+        }
         // Extended Euclid on signed words: |t| stays below p < 2^62.
         long t = 0, newT = 1;
         ulong r = P, newR = a;

@@ -5,7 +5,8 @@ internal static partial class PolyMod
 {
     /// <summary>Quotient and remainder of a by b (b non-zero, trimmed): a = q·b + r, deg r &lt; deg b.
     /// Long division with delayed reduction for short quotients or divisors; Newton iteration for the
-    /// reciprocal of the reversed divisor when both reach <see cref="UnivariateThresholds.NewtonDivision"/>.</summary>
+    /// reciprocal of the reversed divisor when both reach <see cref="UnivariateThresholds.NewtonDivision"/>
+    /// and their product reaches <see cref="UnivariateThresholds.NewtonDivisionWork"/>.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (ulong[] Quotient, ulong[] Remainder) DivRem(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b)
     {
@@ -21,7 +22,8 @@ internal static partial class PolyMod
         if (b.IsEmpty) throw new DivideByZeroException("polynomial division by zero");
         if (a.Length < b.Length) return ([], a.ToArray());
         int la = a.Length, lb = b.Length, lq = la - lb + 1;
-        if (lq < UnivariateThresholds.NewtonDivision || lb < UnivariateThresholds.NewtonDivision)
+        if (lq < UnivariateThresholds.NewtonDivision || lb < UnivariateThresholds.NewtonDivision ||
+            (long)lq * lb < UnivariateThresholds.NewtonDivisionWork)
             return DivRemBasic(ctx.Mod, a, b);
         if (reciprocal is null || reciprocal.Length < lq)
         {

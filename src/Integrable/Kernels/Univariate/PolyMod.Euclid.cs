@@ -3,23 +3,91 @@ namespace Integrable.Kernels.Univariate;
 
 internal static partial class PolyMod
 {
-    /// <summary>In place r0 ← r0 mod r1 (row-oriented long division, suited to the short quotients of a
-    /// remainder sequence); the quotient goes to q[0 … l0 − l1]. Returns the trimmed length of the remainder.</summary>
+    /// <summary>In place r0 ← r0 mod r1; the quotient goes to q[0 … l0 − l1]. Returns the trimmed length of
+    /// the remainder. The quotient is found top-down, then every remainder coefficient
+    /// r0[i] + Σ_k (p − q[k])·r1[i − k] is accumulated exactly and reduced once (in one word when
+    /// (lq + 1)·p² &lt; 2^64, the usual case of a degree-one quotient and p &lt; 2^31).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int RemainderInPlace(in ModulusReducer mod, Span<ulong> r0, int l0, ReadOnlySpan<ulong> r1, int l1, Span<ulong> q)
     {
         ulong inv = mod.Inverse(r1[l1 - 1]);
-        for (int k = l0 - l1; k >= 0; k--)
+        int lq = l0 - l1 + 1;
+        for (int k = lq - 1; k >= 0; k--)
         {
-            ulong c = mod.Mul(r0[k + l1 - 1], inv);
-            q[k] = c;
-            r0[k + l1 - 1] = 0;
-            if (c == 0) continue;
-            ulong nc = mod.Neg(c);
-            var dst = r0.Slice(k, l1 - 1);
-            for (int j = 0; j < dst.Length; j++) dst[j] = mod.Add(dst[j], mod.Mul(nc, r1[j]));
+            // q[k] = (r0[k + l1 − 1] − Σ_{j ≥ 1} q[k + j]·r1[l1 − 1 − j]) / lc(r1)
+            ulong t = r0[k + l1 - 1];
+            int jmax = Math.Min(lq - 1 - k, l1 - 1);
+            for (int j = 1; j <= jmax; j++) t = mod.Sub(t, mod.Mul(q[k + j], r1[l1 - 1 - j]));
+            q[k] = mod.Mul(t, inv);
         }
+        SubtractProductLow(mod, r0, q[..lq], r1[..l1], l1 - 1);
+        r0[(l1 - 1)..l0].Clear();
         return TrimmedLength(r0[..(l1 - 1)]);
+    }
+
+    /// <summary>dst[i] ← dst[i] − Σ_k q[k]·src[i − k] for i &lt; n (src shorter than i − k contributes 0).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void SubtractProductLow(in ModulusReducer mod, Span<ulong> dst, ReadOnlySpan<ulong> q, ReadOnlySpan<ulong> src, int n)
+    {
+        int lq = q.Length, ls = src.Length;
+        ulong p = mod.P;
+        Span<ulong> nq = lq <= 64 ? stackalloc ulong[lq] : new ulong[lq];
+        for (int k = 0; k < lq; k++) nq[k] = q[k] == 0 ? 0 : p - q[k];
+        bool oneWord = p < (1UL << 31) && lq <= 3;                       // (lq + 1)·p² < 2^64
+        if (oneWord && lq == 2)
+        {
+            ulong n0 = nq[0], n1 = nq[1];
+            int i = 0;
+            if (n > 0 && ls > 0) { dst[0] = mod.Reduce64(dst[0] + n0 * src[0]); i = 1; }
+            int both = Math.Min(n, ls);
+            for (; i < both; i++) dst[i] = mod.Reduce64(dst[i] + n0 * src[i] + n1 * src[i - 1]);
+            for (; i < n && i - 1 < ls; i++) dst[i] = mod.Reduce64(dst[i] + n1 * src[i - 1]);
+            return;
+        }
+        if (!oneWord && lq <= 4)
+        {
+            // Large p with a short quotient: Shoup products by the fixed factor p − q[k] with the
+            // precomputed quotient ⌊(p − q[k])·2^64/p⌋ (one high and two low multiplications per term)
+            // beat a 128-bit sum whose final reduction needs three reductions once the high word is set.
+            for (int k = 0; k < lq; k++)
+            {
+                ulong w = nq[k];
+                if (w == 0) continue;
+                ulong wq = (ulong)(((UInt128)w << 64) / p);
+                int iEnd = Math.Min(n, ls + k);
+                for (int i = k; i < iEnd; i++)
+                {
+                    ulong x = src[i - k];
+                    ulong r = x * w - Math.BigMul(x, wq, out _) * p;     // x·w mod p, in [0, 2p)
+                    r -= p;
+                    r += p & (ulong)((long)r >> 63);
+                    dst[i] = mod.Add(dst[i], r);
+                }
+            }
+            return;
+        }
+        for (int i = 0; i < n; i++)
+        {
+            int k0 = Math.Max(0, i - ls + 1), k1 = Math.Min(i, lq - 1);
+            if (k0 > k1) continue;
+            if (oneWord)
+            {
+                ulong acc = dst[i];
+                for (int k = k0; k <= k1; k++) acc += nq[k] * src[i - k];
+                dst[i] = mod.Reduce64(acc);
+                continue;
+            }
+            ulong hi = 0, lo = dst[i];
+            int cnt = 1, lim = mod.DelayedTerms;
+            for (int k = k0; k <= k1; k++)
+            {
+                ulong ph = Math.BigMul(nq[k], src[i - k], out ulong pl);
+                lo += pl;
+                hi += ph + (lo < pl ? 1UL : 0UL);
+                if (++cnt == lim) { lo = mod.Reduce128(hi, lo); hi = 0; cnt = 1; }
+            }
+            dst[i] = mod.Reduce128(hi, lo);
+        }
     }
 
     /// <summary>In place m0 ← m0 − q·m1 for matrix rows (lengths tracked); returns the new trimmed length of m0.</summary>
@@ -29,13 +97,7 @@ internal static partial class PolyMod
         if (l1 == 0 || lq == 0) return l0;
         int n = Math.Max(l0, lq + l1 - 1);
         for (int i = l0; i < n; i++) m0[i] = 0;
-        for (int i = 0; i < lq; i++)
-        {
-            ulong nc = mod.Neg(q[i]);
-            if (nc == 0) continue;
-            var dst = m0.Slice(i, l1);
-            for (int j = 0; j < l1; j++) dst[j] = mod.Add(dst[j], mod.Mul(nc, m1[j]));
-        }
+        SubtractProductLow(mod, m0, q[..lq], m1[..l1], n);
         return TrimmedLength(m0[..n]);
     }
 

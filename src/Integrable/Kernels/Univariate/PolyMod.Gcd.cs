@@ -314,29 +314,36 @@ internal static partial class PolyMod
         return Add(ctx.Mod, p1, p2);
     }
 
-    /// <summary>res(a, b) along the Euclidean remainder sequence (0 when either is zero).</summary>
+    /// <summary>res(a, b) along the Euclidean remainder sequence (0 when either is zero), with the
+    /// remainders computed in place (no allocation per step).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static ulong Resultant(PolyModContext ctx, ulong[] a, ulong[] b)
     {
         var mod = ctx.Mod;
         if (a.Length == 0 || b.Length == 0) return 0;
-        int da = a.Length - 1, db = b.Length - 1;
         ulong res = 1;
-        if (da < db)
+        if (a.Length < b.Length)
         {
             (a, b) = (b, a);
-            (da, db) = (db, da);
-            if (((long)da * db & 1) != 0) res = mod.Neg(res);
+            if (((long)(a.Length - 1) * (b.Length - 1) & 1) != 0) res = mod.Neg(res);
         }
+        var r0 = (ulong[])a.Clone();
+        var r1 = new ulong[r0.Length];
+        b.CopyTo(r1, 0);
+        var q = new ulong[r0.Length];
+        int l0 = r0.Length, l1 = b.Length;
         while (true)
         {
-            if (db == 0) return mod.Mul(res, mod.Pow(b[0], (ulong)da));
-            var r = DivRem(ctx, a, b).Remainder;
-            if (r.Length == 0) return 0;
-            int dr = r.Length - 1;
-            res = mod.Mul(res, mod.Pow(b[^1], (ulong)(da - dr)));
+            int da = l0 - 1, db = l1 - 1;
+            if (db == 0) return mod.Mul(res, mod.Pow(r1[0], (ulong)da));
+            ulong lc = r1[l1 - 1];
+            int lr = RemainderInPlace(mod, r0, l0, r1, l1, q);
+            if (lr == 0) return 0;
+            int dr = lr - 1;
+            res = mod.Mul(res, mod.Pow(lc, (ulong)(da - dr)));
             if (((long)da * db & 1) != 0) res = mod.Neg(res);
-            (a, b, da, db) = (b, r, db, dr);
+            (r0, r1) = (r1, r0);
+            (l0, l1) = (l1, lr);
         }
     }
 }

@@ -22,12 +22,16 @@ internal static class UnivariateThresholds
     /// shortest entry has this many coefficients; below, each product is dispatched on its own.</summary>
     internal static int MatrixTransform = 40;
 
-    /// <summary>Newton (reciprocal) division replaces long division when both the quotient and the divisor have at least this many coefficients.</summary>
-    internal static int NewtonDivision = 400;
+    /// <summary>Newton (reciprocal) division replaces long division when both the quotient and the divisor
+    /// have at least this many coefficients and their product reaches <see cref="NewtonDivisionWork"/>.</summary>
+    internal static int NewtonDivision = 32;
+
+    /// <summary>Minimum (quotient length)·(divisor length) for Newton division (measured crossover ≈ 6000–16000).</summary>
+    internal static long NewtonDivisionWork = 8192;
 
     /// <summary>Half-GCD replaces the plain Euclidean algorithm at this degree of the larger operand.</summary>
-    internal static int HalfGcd = 200;
+    internal static int HalfGcd = 600;
 
     /// <summary>Degree below which the half-GCD recursion falls back to plain Euclidean steps with matrix tracking.</summary>
-    internal static int HalfGcdBase = 100;
+    internal static int HalfGcdBase = 200;
 }

@@ -4,7 +4,7 @@ namespace Integrable.Benchmarks;
 
 /// <summary>Gcd of two random dense polynomials of degrees d and d − 1 over Z/pZ (coprime: the full
 /// remainder sequence), by half-GCD (<c>-- UniGcd d [p|large] [reps]</c>).</summary>
-public sealed class UniGcdWorkload : IWorkload
+public sealed class UnivariateGcdWorkload : IWorkload
 {
     /// <inheritdoc/>
     public string Name => "UniGcd";

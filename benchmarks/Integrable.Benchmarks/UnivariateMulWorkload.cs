@@ -3,7 +3,7 @@ using Integrable.Univariate;
 namespace Integrable.Benchmarks;
 
 /// <summary>Dense product of two random polynomials of degree d over Z/pZ (<c>-- UniMul d [p|large] [reps]</c>).</summary>
-public sealed class UniMulWorkload : IWorkload
+public sealed class UnivariateMulWorkload : IWorkload
 {
     /// <inheritdoc/>
     public string Name => "UniMul";

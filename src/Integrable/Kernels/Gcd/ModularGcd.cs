@@ -179,7 +179,13 @@ internal static class ModularGcd
             if (acc.PrimeCount > 0)
             {
                 int cmp = PolynomialAdd.Compare(h.Exps.AsSpan(0, n), acc.Leading);
-                if (cmp > 0) { GcdHooks.UnluckyPrimes++; continue; }
+                if (cmp > 0)
+                {
+                    GcdHooks.UnluckyPrimes++;
+                    if (++failures > 64) throw new InvalidOperationException("Modular gcd (Zippel): too many primes failed.");
+                    if (failures % 8 == 0) { GcdHooks.Restarts++; acc.Reset(); }
+                    continue;
+                }
                 if (cmp < 0) { GcdHooks.Restarts++; acc.Reset(); }
             }
             bool stable = acc.Add(h, f);
@@ -312,7 +318,15 @@ internal static class ModularGcd
             if (accH.PrimeCount > 0)
             {
                 int cmp = PolynomialAdd.Compare(img.G.Exps.AsSpan(0, n), accH.Leading);
-                if (cmp > 0) { GcdHooks.UnluckyPrimes++; continue; }
+                if (cmp > 0)
+                {
+                    // Unlucky primes are finitely many; a long run of "too high" images means the
+                    // accumulated one was wrong (too low), so start again rather than loop.
+                    GcdHooks.UnluckyPrimes++;
+                    if (++failures > 64) throw new InvalidOperationException("Modular gcd: too many primes failed.");
+                    if (failures % 8 == 0) { GcdHooks.Restarts++; accH.Reset(); accA?.Reset(); accB?.Reset(); }
+                    continue;
+                }
                 if (cmp < 0)
                 {
                     GcdHooks.Restarts++;

@@ -142,7 +142,12 @@ internal static class ModularGcd
         }
         else
         {
-            var gamma = ComputeCore(LeadingInFirst(A1), LeadingInFirst(B1), depth + 1).G;
+            // γ must be the full gcd over Z[x₁, …] (integer content included), so that lc(g) divides it
+            // and H = γ·g/lc(g) has integer coefficients.
+            var lcA = LeadingInFirst(A1);
+            var lcB = LeadingInFirst(B1);
+            BigInteger ia = lcA.Content(), ib = lcB.Content();
+            var gamma = ComputeCore(lcA.DivideExact(ia), lcB.DivideExact(ib), depth + 1).G.Scale(BigInteger.GreatestCommonDivisor(ia, ib));
             (g1, a1bar, b1bar) = ZippelModular(A1, B1, gamma, depth);
         }
         // gcd = c·g1, cofactors (ca/c)·ā₁ and (cb/c)·b̄₁

@@ -60,11 +60,13 @@ public sealed class GcdKernelTests
     {
         var rng = new Random(7);
         int saved = SplitMultiply.WordBits;
+        double savedFactor = SplitMultiply.KroneckerCostFactor;
         try
         {
-            foreach (int wordBits in new[] { 62, 17 })
+            foreach (var (wordBits, factor) in new[] { (62, 1e300), (17, 1e300), (62, 0.0), (17, 0.0) })
             {
                 SplitMultiply.WordBits = wordBits;
+                SplitMultiply.KroneckerCostFactor = factor; // 0: always the transform, 1e300: always limbs
                 for (int i = 0; i < 10; i++)
                 {
                     var a = GcdTestData.Random(rng, R, 8, 3, bits: rng.Next(20, 200), minExp: -2);
@@ -76,7 +78,11 @@ public sealed class GcdKernelTests
                 }
             }
         }
-        finally { SplitMultiply.WordBits = saved; }
+        finally
+        {
+            SplitMultiply.WordBits = saved;
+            SplitMultiply.KroneckerCostFactor = savedFactor;
+        }
     }
 
     [Fact]

@@ -85,6 +85,21 @@ public sealed class ModularGcdTests : IDisposable
         Assert.True(GcdHooks.UnluckyPoints >= 1, "the image at the unlucky point must be discarded");
     }
 
+    [Fact]
+    public void Zippel_LeadingCoefficientWithIntegerContent_Converges()
+    {
+        // lc_x(g) = 6·y·z has integer content 6: γ must keep it, or γ·g/lc(g) is not integral.
+        var ring = new LaurentPolynomialRing("x", "y", "z", "t");
+        var g = LaurentPolynomial.Parse(ring, "6 y z x^2 + 5 x t + 7");
+        var a = g * LaurentPolynomial.Parse(ring, "4 z x + y - t");
+        var b = g * LaurentPolynomial.Parse(ring, "10 y x + t^2 + 1");
+        GcdHooks.ForceAlgorithm = GcdAlgorithm.Zippel;
+        var (gcd, ca, cb) = a.GcdWithCofactors(b);
+        Assert.Equal(g, gcd);
+        Assert.Equal(a, gcd * ca);
+        Assert.Equal(b, gcd * cb);
+    }
+
     [Theory]
     [InlineData(0)]
     [InlineData(1)]

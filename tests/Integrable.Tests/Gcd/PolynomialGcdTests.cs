@@ -17,6 +17,7 @@ public sealed class PolynomialGcdTests
         Assert.Equal(GcdTestData.Normalised(expected), g);
         Assert.Equal(a, g * ca);
         Assert.Equal(b, g * cb);
+        Assert.True(ca.Gcd(cb).IsOne, "the cofactors must be coprime");
     }
 
     [Fact]

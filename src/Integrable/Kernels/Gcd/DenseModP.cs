@@ -83,9 +83,12 @@ internal static class DenseModP
         {
             ulong c = r[i];
             if (c == 0) continue;
-            ulong q = f.Mul(c, inv);
+            // subtract (p − q)·d, i.e. add q′·d with q′ = −q, using Shoup's multiplier for the fixed q′
+            ulong q = f.Neg(f.Mul(c, inv));
+            ulong qs = f.ShoupFactor(q);
             int off = i - (ld - 1);
-            for (int j = 0; j < ld - 1; j++) r[off + j] = f.Sub(r[off + j], f.Mul(q, d[j]));
+            var row = r.Slice(off, ld - 1);
+            for (int j = 0; j < row.Length; j++) row[j] = f.Add(row[j], f.MulShoup(d[j], q, qs));
             r[i] = 0;
         }
         int n = Math.Min(len, ld - 1);
@@ -147,7 +150,8 @@ internal static class DenseModP
             ulong qc = f.Mul(c, inv);
             int off = i - (ld - 1);
             q[off] = qc;
-            for (int j = 0; j < ld - 1; j++) r[off + j] = f.Sub(r[off + j], f.Mul(qc, d[j]));
+            ulong nq = f.Neg(qc), nqs = f.ShoupFactor(nq);
+            for (int j = 0; j < ld - 1; j++) r[off + j] = f.Add(r[off + j], f.MulShoup(d[j], nq, nqs));
         }
         for (int i = 0; i < ld - 1; i++)
             if (r[i] != 0) return false;

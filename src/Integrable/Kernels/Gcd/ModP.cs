@@ -41,6 +41,20 @@ internal readonly struct ModP
         return r;
     }
 
+    /// <summary>Shoup's precomputation for multiplying many values by the same w &lt; p: ⌊w·2^64/p⌋.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong ShoupFactor(ulong w) => (ulong)(((UInt128)w << 64) / P);
+
+    /// <summary>x·w mod p for x &lt; p with <paramref name="wShoup"/> = <see cref="ShoupFactor"/>(w): one high
+    /// and two low products, no 128-bit reduction.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ulong MulShoup(ulong x, ulong w, ulong wShoup)
+    {
+        ulong q = Math.BigMul(x, wShoup, out _);
+        ulong r = x * w - q * P;
+        return r >= P ? r - P : r;
+    }
+
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public ulong Add(ulong a, ulong b)
     {

@@ -105,16 +105,29 @@ internal static class ModularDivision
             ulong qv0 = f.Mul(c, inv);
             qc.Add(qv0);
             qe.AddRange(e);
-            long baseIdx = idx;
             dense[idx] = 0;
-            for (int j = 1; j < bc.Length; j++)
-            {
-                long pos = baseIdx - boff[j];
-                dense[pos] = f.Sub(dense[pos], f.Mul(qv0, bc[j]));
-            }
+            SubtractMultiple(ref dense[idx], ref bc[0], ref boff[0], bc.Length, f.Neg(qv0), f);
         }
         q = new SparseModPoly(n, qc.ToArray(), qe.ToArray(), qc.Count);
         return true;
+    }
+
+    /// <summary>at[−off[j]] += q·b[j] for j = 1..count−1 (all positions inside the array by construction).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void SubtractMultiple(ref ulong at, ref ulong b, ref long off, int count, ulong q, in ModP f)
+    {
+        ulong qs = f.ShoupFactor(q);
+        ulong p = f.P;
+        for (int j = 1; j < count; j++)
+        {
+            ref ulong cell = ref Unsafe.Subtract(ref at, (nint)Unsafe.Add(ref off, j));
+            ulong bj = Unsafe.Add(ref b, j);
+            ulong hi = Math.BigMul(bj, qs, out _);
+            ulong r = bj * q - hi * p;
+            if (r >= p) r -= p;
+            ulong sum = cell + r;
+            cell = sum >= p ? sum - p : sum;
+        }
     }
 
     private static long Index(int[] exps, int t, int n, long[] stride)

@@ -142,7 +142,12 @@ internal static class ModularGcd
         }
         else
         {
-            var gamma = ComputeCore(LeadingInFirst(A1), LeadingInFirst(B1), depth + 1).G;
+            // γ must be the full gcd over Z[x₁, …] (integer content included), so that lc(g) divides it
+            // and H = γ·g/lc(g) has integer coefficients.
+            var lcA = LeadingInFirst(A1);
+            var lcB = LeadingInFirst(B1);
+            BigInteger ia = lcA.Content(), ib = lcB.Content();
+            var gamma = ComputeCore(lcA.DivideExact(ia), lcB.DivideExact(ib), depth + 1).G.Scale(BigInteger.GreatestCommonDivisor(ia, ib));
             (g1, a1bar, b1bar) = ZippelModular(A1, B1, gamma, depth);
         }
         // gcd = c·g1, cofactors (ca/c)·ā₁ and (cb/c)·b̄₁
@@ -179,7 +184,13 @@ internal static class ModularGcd
             if (acc.PrimeCount > 0)
             {
                 int cmp = PolynomialAdd.Compare(h.Exps.AsSpan(0, n), acc.Leading);
-                if (cmp > 0) { GcdHooks.UnluckyPrimes++; continue; }
+                if (cmp > 0)
+                {
+                    GcdHooks.UnluckyPrimes++;
+                    if (++failures > 64) throw new InvalidOperationException("Modular gcd (Zippel): too many primes failed.");
+                    if (failures % 8 == 0) { GcdHooks.Restarts++; acc.Reset(); }
+                    continue;
+                }
                 if (cmp < 0) { GcdHooks.Restarts++; acc.Reset(); }
             }
             bool stable = acc.Add(h, f);
@@ -312,7 +323,15 @@ internal static class ModularGcd
             if (accH.PrimeCount > 0)
             {
                 int cmp = PolynomialAdd.Compare(img.G.Exps.AsSpan(0, n), accH.Leading);
-                if (cmp > 0) { GcdHooks.UnluckyPrimes++; continue; }
+                if (cmp > 0)
+                {
+                    // Unlucky primes are finitely many; a long run of "too high" images means the
+                    // accumulated one was wrong (too low), so start again rather than loop.
+                    GcdHooks.UnluckyPrimes++;
+                    if (++failures > 64) throw new InvalidOperationException("Modular gcd: too many primes failed.");
+                    if (failures % 8 == 0) { GcdHooks.Restarts++; accH.Reset(); accA?.Reset(); accB?.Reset(); }
+                    continue;
+                }
                 if (cmp < 0)
                 {
                     GcdHooks.Restarts++;

@@ -1,5 +1,3 @@
-using Integrable.Numbers;
-
 namespace Integrable.Polynomials;
 
 public static partial class PolynomialGcd
@@ -72,7 +70,4 @@ public static partial class PolynomialGcd
             throw new InvalidOperationException("internal error: a computed divisor does not divide exactly");
         return q;
     }
-
-    /// <summary>Multiplies by c·x^e (kept here because the polynomial's own helper is internal to its file group).</summary>
-    internal static LaurentPolynomial TimesMonomial(LaurentPolynomial p, Rational c, int[] e) => p.MultiplyByMonomial(c, e);
 }

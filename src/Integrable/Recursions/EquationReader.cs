@@ -55,7 +55,7 @@ internal static class EquationReader
                 throw new EquationException(
                     $"'{s.Name}' has {s.Subscripts.Count} indices; a scalar recursion has one index {index} (lattice equations such as T-systems have their own type)",
                     s.Span);
-            int shift = ReadShift(s.Subscripts[0], index, s);
+            int shift = ReadShift(s.Subscripts[0], index, $"the subscript of '{s.Name}'");
             if (!unknowns.Contains(s.BaseName)) unknowns.Add(s.BaseName);
             terms[s.Name] = new ShiftedTerm(s.BaseName, shift);
         }
@@ -85,7 +85,9 @@ internal static class EquationReader
     private static bool Mentions(Expression e, string index) =>
         ExpressionEvaluator.Symbols(e).Any(s => s.Name == index);
 
-    private static int ReadShift(Expression subscript, string index, SymbolExpression owner)
+    /// <summary>Reads a subscript of the form index ± integer and returns the integer shift;
+    /// <paramref name="what"/> names the subscript in the error ("the subscript of 'x_{2n}'").</summary>
+    internal static int ReadShift(Expression subscript, string index, string what, int maxShift = 1_000_000)
     {
         Rational At(long n)
         {
@@ -96,17 +98,14 @@ internal static class EquationReader
             }
             catch (ExpressionEvaluationException e)
             {
-                throw new EquationException($"the subscript of '{owner.Name}' must be {index} plus or minus an integer ({e.Reason})", subscript.Span);
+                throw new EquationException($"{what} must be {index} plus or minus an integer ({e.Reason})", subscript.Span);
             }
         }
         var v0 = At(0);
-        var v1 = At(1);
-        if (v1 - v0 != Rational.One || !v0.IsInteger || BigAbs(v0) > 1_000_000)
-            throw new EquationException($"the subscript of '{owner.Name}' must be {index} plus or minus an integer", subscript.Span);
+        if (At(1) - v0 != Rational.One || !v0.IsInteger || Rational.Abs(v0) > maxShift)
+            throw new EquationException($"{what} must be {index} plus or minus an integer", subscript.Span);
         return (int)(long)v0;
     }
-
-    private static Rational BigAbs(Rational r) => Rational.Abs(r);
 
     /// <summary>Solves <paramref name="equation"/> for the term named <paramref name="target"/>
     /// (which must enter linearly) in the program ring; every other symbol is the program step given

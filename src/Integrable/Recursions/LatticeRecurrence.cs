@@ -122,25 +122,8 @@ public sealed class LatticeRecurrence
         return names[0];
     }
 
-    private static int Shift(SymbolExpression s, int slot, string index)
-    {
-        Rational At(long v)
-        {
-            try
-            {
-                return ExpressionEvaluator.Evaluate(s.Subscripts[slot], RationalField.Instance,
-                    t => t.Name == index ? new Rational(v) : throw new KeyNotFoundException(t.Name));
-            }
-            catch (ExpressionEvaluationException e)
-            {
-                throw new EquationException($"subscript {slot + 1} of '{s.Name}' must be {index} plus or minus an integer ({e.Reason})", s.Subscripts[slot].Span);
-            }
-        }
-        var v0 = At(0);
-        if (At(1) - v0 != Rational.One || !v0.IsInteger || Rational.Abs(v0) > 10_000)
-            throw new EquationException($"subscript {slot + 1} of '{s.Name}' must be {index} plus or minus an integer", s.Subscripts[slot].Span);
-        return (int)(long)v0;
-    }
+    private static int Shift(SymbolExpression s, int slot, string index) =>
+        EquationReader.ReadShift(s.Subscripts[slot], index, $"subscript {slot + 1} of '{s.Name}'", 10_000);
 
     /// <summary>Computes T_{a,n} (n ≥ k) from the initial rows n = 0, …, k−1.</summary>
     /// <typeparam name="T">Element type of the domain.</typeparam>

@@ -57,7 +57,11 @@ internal static class EquationReader
                     s.Span);
             int shift = ReadShift(s.Subscripts[0], index, $"the subscript of '{s.Name}'");
             if (!unknowns.Contains(s.BaseName)) unknowns.Add(s.BaseName);
-            terms[s.Name] = new ShiftedTerm(s.BaseName, shift);
+            var term = new ShiftedTerm(s.BaseName, shift);
+            foreach (var (other, t) in terms)
+                if (t == term)
+                    throw new EquationException($"'{s.Name}' and '{other}' are the same term written two ways; write it one way", s.Span);
+            terms[s.Name] = term;
         }
         if (unknowns.Count == 0)
             throw new EquationException($"no term with the index {index} in a subscript (write e.g. x_n, x_{{{index}+1}})", equations[0].Left.Span.Union(equations[^1].Right.Span));

@@ -97,6 +97,7 @@ public class RecurrenceTests
     [InlineData("x_{n+1} + x_n = x_{n+1} + 1", "cancels out")]
     [InlineData("x_n = x_n + 1", "only one shift")]
     [InlineData("x + y = 1", "no index variable")]
+    [InlineData("x_{n+1} x_{n*1} = x_n^2 + 1", "same term written two ways")]
     [InlineData("x_{2n} = x_n", "plus or minus an integer")]
     [InlineData("x_{n+1} = y_n", "several unknowns")]
     [InlineData("x_{n+1} = x_n + x", "both as an unknown")]

@@ -29,8 +29,8 @@ internal sealed class ExploreCommand : CliCommand
         try
         {
             report = args.Has("exact")
-                ? ExchangeGraph.Explore(LaurentSeeds.Initial(matrix), options, cancellationToken: context.Cancellation).Report
-                : ExchangeGraph.Explore(matrix, options, cancellationToken: context.Cancellation);
+                ? ExchangeGraph.Explore(LaurentSeeds.Initial(matrix), options, cancellation: context.Cancellation).Report
+                : ExchangeGraph.Explore(matrix, options, cancellation: context.Cancellation);
         }
         catch (OverflowException e)
         {

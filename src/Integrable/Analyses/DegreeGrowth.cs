@@ -38,6 +38,7 @@ public static class DegreeGrowth
     public static GrowthReport Analyse(Recurrence recurrence, int steps, GrowthOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         options ??= GrowthOptions.Default;
         return DegreeEngine.Run(new RecursionMap(recurrence, options.Start), steps, options, f => new UnreducedLineField(f), progress, cancellation);
@@ -58,6 +59,7 @@ public static class DegreeGrowth
     public static GrowthReport Analyse(RecurrenceSystem system, int steps, GrowthOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(system);
         return DegreeEngine.Run(new RecursionMap(system), steps, options ?? GrowthOptions.Default, f => new UnreducedLineField(f), progress, cancellation);
     }

@@ -43,6 +43,7 @@ public static class LaurentPhenomenon
     public static LaurentReport Check(Recurrence recurrence, int steps, LaurentOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         ArgumentOutOfRangeException.ThrowIfLessThan(steps, 1);
         options ??= LaurentOptions.Default;
@@ -106,6 +107,7 @@ public static class LaurentPhenomenon
     public static LaurentReport Check(RecurrenceSystem system, int steps, LaurentOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(system);
         ArgumentOutOfRangeException.ThrowIfLessThan(steps, 1);
         options ??= LaurentOptions.Default;
@@ -180,6 +182,7 @@ public static class LaurentPhenomenon
     public static LaurentReport Check(LatticeRecurrence lattice, int time, int space = 0, (int Min, int Max)? spaceRange = null,
         LaurentOptions? options = null, IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(lattice);
         ArgumentOutOfRangeException.ThrowIfLessThan(time, lattice.Order);
         if (spaceRange is { } sr && (sr.Min > sr.Max || space < sr.Min || space > sr.Max))
@@ -265,6 +268,7 @@ public static class LaurentPhenomenon
     public static LaurentReport CheckOctahedron(int height, LaurentOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentOutOfRangeException.ThrowIfLessThan(height, 2);
         options ??= LaurentOptions.Default;
         int parity = height & 1;
@@ -345,6 +349,7 @@ public static class LaurentPhenomenon
     public static LaurentReport Check(ExchangeMatrix matrix, IEnumerable<int> directions, LaurentOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(matrix);
         ArgumentNullException.ThrowIfNull(directions);
         var dirs = directions.ToArray();

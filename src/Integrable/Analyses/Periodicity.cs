@@ -41,6 +41,7 @@ public static class Periodicity
     public static PeriodReport Find(Recurrence recurrence, int maxPeriod, PeriodOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         options ??= PeriodOptions.Default;
         return Find(new RecursionMap(recurrence, options.Start), maxPeriod, options, progress, cancellation);
@@ -62,6 +63,7 @@ public static class Periodicity
     public static PeriodReport Find(RecurrenceSystem system, int maxPeriod, PeriodOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(system);
         return Find(new RecursionMap(system), maxPeriod, options ?? PeriodOptions.Default, progress, cancellation);
     }

@@ -45,6 +45,7 @@ public static class SingularityConfinement
     public static ConfinementReport Test(Recurrence recurrence, ConfinementOptions? options = null,
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         options ??= ConfinementOptions.Default;
         ArgumentOutOfRangeException.ThrowIfLessThan(options.Steps, 1, nameof(options));

@@ -46,7 +46,7 @@ public static class ExchangeGraph
     /// <param name="matrix">The extended exchange matrix of the initial seed.</param>
     /// <param name="options">Limits; <see cref="ExplorationOptions.Default"/> when null.</param>
     /// <param name="progress">Receives progress reports, or null.</param>
-    /// <param name="cancellationToken">Cancels the search.</param>
+    /// <param name="cancellation">Cancels the search.</param>
     /// <returns>Seed and cluster-variable counts, and whether the exploration is complete.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="matrix"/> is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException"><see cref="ExplorationOptions.MaxSeeds"/> is below 1.</exception>
@@ -54,8 +54,9 @@ public static class ExchangeGraph
     /// <exception cref="OverflowException">A matrix entry grows beyond 32 bits (infinite type).</exception>
     public static ExchangeGraphReport Explore(
         ExchangeMatrix matrix, ExplorationOptions? options = null,
-        IProgress<ExplorationProgress>? progress = null, CancellationToken cancellationToken = default)
+        IProgress<ExplorationProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(matrix);
         options = CheckOptions(options);
         for (int attempt = 0; attempt < Attempts; attempt++)
@@ -70,7 +71,7 @@ public static class ExchangeGraph
             try
             {
                 var (seeds, variables, complete, depth) =
-                    search.Run(point[..matrix.MutableCount], matrix, options, progress, cancellationToken);
+                    search.Run(point[..matrix.MutableCount], matrix, options, progress, cancellation);
                 return new ExchangeGraphReport(seeds, variables, complete, depth,
                     $"fingerprints: values at pseudo-random points modulo {f.Modulus} and {g.Modulus}");
             }
@@ -96,7 +97,7 @@ public static class ExchangeGraph
     /// <see cref="IRing{T}.AreEqual"/>; the default equality of <typeparamref name="T"/> when null (right
     /// for canonical types such as <c>Rational</c>, residues and Laurent polynomials).</param>
     /// <param name="progress">Receives progress reports, or null.</param>
-    /// <param name="cancellationToken">Cancels the search.</param>
+    /// <param name="cancellation">Cancels the search.</param>
     /// <returns>The counts and the distinct cluster variables found.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="initial"/> is null.</exception>
     /// <exception cref="ArgumentException">Two initial cluster variables are equal, or a mutation gives a
@@ -106,9 +107,10 @@ public static class ExchangeGraph
     /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
     public static ExchangeGraphExploration<T> Explore<T>(
         Seed<T> initial, ExplorationOptions? options = null, IEqualityComparer<T>? comparer = null,
-        IProgress<ExplorationProgress>? progress = null, CancellationToken cancellationToken = default)
+        IProgress<ExplorationProgress>? progress = null, CancellationToken cancellation = default)
         where T : notnull
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(initial);
         options = CheckOptions(options);
         var search = new RingSearch<T>(initial.Ring, initial.Frozen.ToArray(), comparer);
@@ -116,7 +118,7 @@ public static class ExchangeGraph
         bool complete;
         try
         {
-            (seeds, variables, complete, depth) = search.Run(initial.Cluster, initial.Matrix, options, progress, cancellationToken);
+            (seeds, variables, complete, depth) = search.Run(initial.Cluster, initial.Matrix, options, progress, cancellation);
         }
         catch (ExchangeGraphSearch<T>.DegenerateValuesException e)
         {

@@ -48,7 +48,7 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public (int Seeds, int Variables, bool Complete, int Depth) Run(
         IReadOnlyList<T> initialCluster, ExchangeMatrix matrix, ExplorationOptions options,
-        IProgress<ExplorationProgress>? progress, CancellationToken cancellationToken)
+        IProgress<ExplorationProgress>? progress, CancellationToken cancellation)
     {
         int n = _n = matrix.MutableCount;
         int cells = _cells = matrix.RowCount * n;
@@ -77,7 +77,7 @@ internal abstract class ExchangeGraphSearch<T> where T : notnull
         int current = 0;
         for (; current < _count && complete; current++)
         {
-            cancellationToken.ThrowIfCancellationRequested();
+            cancellation.ThrowIfCancellationRequested();
             int s = current;
             _idBuf.AsSpan(s * n, n).CopyTo(ids);
             _keyBuf.AsSpan(s * n, n).CopyTo(sorted);

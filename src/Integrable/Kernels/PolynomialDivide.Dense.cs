@@ -60,6 +60,7 @@ internal static partial class PolynomialDivide
         int pp = 0;
         for (long H = hPmax; H >= hPmin; H--)
         {
+            KernelCancellation.Poll();
             int top = -1, bottom = int.MaxValue;
             // (1) dividend terms of this window
             while (pp < ip.Length && ip[pp] / L == H)

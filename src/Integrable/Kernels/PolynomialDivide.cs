@@ -54,8 +54,10 @@ internal static partial class PolynomialDivide
         ulong d0 = ed[0];
         TC lc = cd[0];
 
+        int polls = 0;
         while (hlen > 1 || pi < np)
         {
+            if ((++polls & 1023) == 0) KernelCancellation.Poll();
             ulong exp;
             if (hlen == 1) exp = ep[pi];
             else if (pi < np && ep[pi] > hexp[1]) exp = ep[pi];
@@ -178,8 +180,10 @@ internal static partial class PolynomialDivide
         int hlen = 1, pi = 0;
         TC lc = cd[0];
 
+        int polls = 0;
         while (hlen > 1 || pi < np)
         {
+            if ((++polls & 1023) == 0) KernelCancellation.Poll();
             if (hlen == 1) ep.Slice(pi * N, N).CopyTo(exp);
             else
             {

@@ -49,6 +49,7 @@ internal static partial class PolynomialMultiply
         int gLo = 0, gHi = 0; // A groups whose partner high part lies in [minHB, maxHB]
         for (long H = hMax; H >= hMin - (aligned ? 0 : 1); H--)
         {
+            KernelCancellation.Poll();
             int lowLo = int.MaxValue, lowHi = -1;
             while (gLo < ga && aHigh[gLo] > H - minHB) gLo++;
             while (gHi < ga && aHigh[gHi] >= H - maxHB) gHi++;

@@ -50,8 +50,10 @@ internal static partial class PolynomialMultiply
         nj = 0;
         hind = 2;
 
+        int polls = 0;
         while (hlen > 1)
         {
+            if ((++polls & 1023) == 0) KernelCancellation.Poll();
             ulong exp = Unsafe.Add(ref heap, 1).Exp;
             TOps.Set(out TAcc acc, default!);
             int sp = 0;
@@ -185,8 +187,10 @@ internal static partial class PolynomialMultiply
         hhead[1] = 0; hlen = 2;
         hind[0] = 2;
 
+        int polls = 0;
         while (hlen > 1)
         {
+            if ((++polls & 1023) == 0) KernelCancellation.Poll();
             rowExp.AsSpan(hhead[1] * N, N).CopyTo(cur);
             TOps.Set(out TAcc acc, default!);
             int sp = 0;

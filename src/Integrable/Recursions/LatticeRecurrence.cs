@@ -143,6 +143,7 @@ public sealed class LatticeRecurrence
         Func<int, int, T>? boundary = null, int spaceMin = int.MinValue, int spaceMax = int.MaxValue,
         CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(ring);
         ArgumentNullException.ThrowIfNull(initial);
         ArgumentOutOfRangeException.ThrowIfNegative(n);

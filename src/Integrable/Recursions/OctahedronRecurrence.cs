@@ -47,6 +47,7 @@ public static class OctahedronRecurrence
     public static T Evaluate<T>(IRing<T> ring, SteppedSurface surface, Func<int, int, T> initial, int i, int j, int k,
         Func<int, int, int, T>? boundary, int iMin, int iMax, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(ring);
         ArgumentNullException.ThrowIfNull(surface);
         ArgumentNullException.ThrowIfNull(initial);

@@ -136,6 +136,7 @@ public sealed class Recurrence
     public IReadOnlyList<T> Iterate<T>(IRing<T> ring, IReadOnlyList<T> initial, int steps,
         IReadOnlyList<T>? parameters = null, long start = 0, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(ring);
         ArgumentNullException.ThrowIfNull(initial);
         ArgumentOutOfRangeException.ThrowIfNegative(steps);
@@ -168,6 +169,7 @@ public sealed class Recurrence
     public IReadOnlyList<T> IterateBackward<T>(IRing<T> ring, IReadOnlyList<T> initial, int steps,
         IReadOnlyList<T>? parameters = null, long start = 0, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         if (InverseRule is null)
             throw new InvalidOperationException($"the lowest shift of {Unknown} does not enter the equation linearly, so there is no backward rule");
         ArgumentNullException.ThrowIfNull(ring);

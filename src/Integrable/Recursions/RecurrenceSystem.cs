@@ -149,6 +149,7 @@ public sealed class RecurrenceSystem
     public IReadOnlyList<T[]> Iterate<T>(IRing<T> ring, IReadOnlyList<T> initial, int steps,
         IReadOnlyList<T>? parameters = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(ring);
         ArgumentNullException.ThrowIfNull(initial);
         ArgumentOutOfRangeException.ThrowIfNegative(steps);

@@ -63,6 +63,7 @@ public sealed class TSystem
     /// <exception cref="SingularStepException">A division fails in <paramref name="ring"/>.</exception>
     public T Evaluate<T>(IRing<T> ring, int a, int j, int k, Func<int, int, int, T> initial, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(ring);
         ArgumentNullException.ThrowIfNull(initial);
         CheckNode(a);
@@ -92,6 +93,7 @@ public sealed class TSystem
     /// <exception cref="SingularStepException">A division fails in <paramref name="ring"/>.</exception>
     public T EvaluateReduced<T>(IRing<T> ring, int a, int n, Func<int, int, T> initial, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(ring);
         ArgumentNullException.ThrowIfNull(initial);
         CheckNode(a);

@@ -122,7 +122,7 @@ public class ExchangeGraphTests
     {
         using var cts = new CancellationTokenSource();
         cts.Cancel();
-        Assert.Throws<OperationCanceledException>(() => ExchangeGraph.Explore(ExchangeMatrix.FiniteType("A4"), cancellationToken: cts.Token));
+        Assert.Throws<OperationCanceledException>(() => ExchangeGraph.Explore(ExchangeMatrix.FiniteType("A4"), cancellation: cts.Token));
     }
 
     private sealed class Recorder : IProgress<ExplorationProgress>

@@ -119,8 +119,10 @@ internal static partial class PolyMod
             m00 = new ulong[cap]; m01 = new ulong[cap]; m10 = new ulong[cap]; m11 = new ulong[cap];
             m00[0] = 1; m11[0] = 1;
         }
+        int polls = 0;
         while (lb > 0 && lb - 1 >= m)
         {
+            if ((++polls & 63) == 0) KernelCancellation.Poll();
             int lq = la - lb + 1;
             int lr = RemainderInPlace(mod, r0, la, r1, lb, q);
             // (r0, r1) ← (r1, r0 mod r1)

@@ -79,6 +79,7 @@ internal static partial class PolyMod
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static (PolyMatrix? M, ulong[] C, ulong[] D) HalfGcd(PolyModContext ctx, ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, bool needMatrix)
     {
+        KernelCancellation.Poll();
         int n = a.Length - 1, m = (n + 1) / 2;
         if (b.Length - 1 < m) return (needMatrix ? PolyMatrix.Identity() : null, a.ToArray(), b.ToArray());
         if (n < UnivariateThresholds.HalfGcdBase || n < 8) return HalfGcdBase(ctx, a, b, m, needMatrix);

@@ -51,6 +51,7 @@ internal static partial class PolyMod
     {
         if (a.Length < b.Length) { var t = a; a = b; b = t; }
         int la = a.Length, lb = b.Length;
+        if (lb >= 64) KernelCancellation.Poll();
         if (lb < UnivariateThresholds.Ntt)
         {
             if (lb < UnivariateThresholds.Karatsuba) MultiplySchoolbook(ctx.Mod, a, b, dst);
@@ -84,6 +85,7 @@ internal static partial class PolyMod
         int la = a.Length, lb = b.Length, n = la + lb - 1;
         for (int k = 0; k < n; k++)
         {
+            if ((k & 1023) == 1023) KernelCancellation.Poll();
             int i0 = Math.Max(0, k - lb + 1), i1 = Math.Min(k, la - 1);
             ulong hi = 0, lo = 0;
             int cnt = 0, lim = mod.DelayedTerms;

@@ -58,6 +58,43 @@ internal static class CoefficientForm
         return true;
     }
 
+    /// <summary>Writes c_i = m_i / denominator with every |m_i| &lt; 2^191 in multi-limb form (the input of
+    /// the multi-limb path). Fails when some value does not fit.</summary>
+    public static bool TryMagnitudes(ReadOnlySpan<Rational> c, out Magnitude192[] magnitudes, out BigInteger denominator)
+    {
+        ToBig(c, out var ints, out denominator);
+        return TryMagnitudes(ints, out magnitudes);
+    }
+
+    /// <summary>The multi-limb form of integer coefficients read straight from the rationals (no common
+    /// denominator, no intermediate big integers for word-size values); false when some coefficient is not
+    /// an integer or has 192 bits or more.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public static bool TryIntegerMagnitudes(ReadOnlySpan<Rational> c, out Magnitude192[] magnitudes)
+    {
+        magnitudes = new Magnitude192[c.Length];
+        for (int i = 0; i < c.Length; i++)
+        {
+            if (c[i].TryGetSmall(out long n, out long d))
+            {
+                if (d != 1) return false;
+                magnitudes[i].L0 = n < 0 ? (ulong)(-(n + 1)) + 1UL : (ulong)n;
+                magnitudes[i].Negative = n < 0;
+            }
+            else if (!c[i].IsInteger || !Magnitude192.TryFrom(c[i].Numerator, out magnitudes[i])) return false;
+        }
+        return true;
+    }
+
+    /// <summary>The multi-limb form of integers, or false when some |value| ≥ 2^191.</summary>
+    public static bool TryMagnitudes(ReadOnlySpan<BigInteger> ints, out Magnitude192[] magnitudes)
+    {
+        magnitudes = new Magnitude192[ints.Length];
+        for (int i = 0; i < ints.Length; i++)
+            if (!Magnitude192.TryFrom(ints[i], out magnitudes[i])) return false;
+        return true;
+    }
+
     /// <summary>Writes c_i = ints_i / denominator with big integers.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static void ToBig(ReadOnlySpan<Rational> c, out BigInteger[] ints, out BigInteger denominator)

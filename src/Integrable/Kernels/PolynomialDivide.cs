@@ -395,6 +395,26 @@ internal static partial class PolynomialDivide
         foreach (var x in bb) bg = BigInteger.GreatestCommonDivisor(bg, x);
         if (bb[0].Sign < 0) bg = -bg;
         if (!bg.IsOne) for (int i = 0; i < bb.Length; i++) bb[i] /= bg;
+        // Multi-limb path: divisor and quotient below 2^191, dividend below 2^446, so every partial sum
+        // (dividend minus fewer than 2^31 products) stays inside the 448-bit accumulator.
+        if (!PolynomialMultiply.ForceBig && CoefficientForm.TryMagnitudes(bb, out var mdiv))
+        {
+            var p448 = new Int448[ba.Length];
+            bool fits = true;
+            for (int i = 0; i < ba.Length && fits; i++) fits = Int448.TryFrom(ba[i], out p448[i]);
+            if (fits)
+            {
+                var wideStatus = ctx.Run<Wide448Ops, Magnitude192, Int448>(p448, mdiv, default, double.PositiveInfinity, static _ => 0, out var qm, out var qem);
+                if (wideStatus == DivideStatus.NotDivisible) return false;
+                if (wideStatus == DivideStatus.Exact)
+                {
+                    var wideScale = new Rational(bdb, bda * bg);
+                    var wide = new Rational[qm!.Length];
+                    for (int i = 0; i < wide.Length; i++) wide[i] = new Rational(qm[i].ToBigInteger()) * wideScale;
+                    return ctx.Finish(wide, qem, out coeffs, out exps);
+                }
+            }
+        }
         var bigStatus = ctx.Run<BigOps, BigInteger, BigInteger>(ba, bb, BigInteger.Zero, double.PositiveInfinity, static _ => 0, out var qb, out var qeb);
         if (bigStatus != DivideStatus.Exact) return false;
         var bigScale = new Rational(bdb, bda * bg);

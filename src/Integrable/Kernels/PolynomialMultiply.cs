@@ -44,6 +44,9 @@ internal static partial class PolynomialMultiply
     /// thread (tests use tiny windows to exercise the carries between windows).</summary>
     [ThreadStatic] internal static int ForceDenseShift;
 
+    /// <summary>Skips the multi-limb path on the current thread (tests compare it with big integers).</summary>
+    [ThreadStatic] internal static bool ForceBig;
+
     /// <summary>Dense is chosen only when the degree box has at most this many cells per term product.</summary>
     internal static double DenseBoxPerProduct = 2.0;
 
@@ -77,8 +80,19 @@ internal static partial class PolynomialMultiply
             }
             return;
         }
+        if (!ForceBig && CoefficientForm.TryIntegerMagnitudes(ca, out var ia) && CoefficientForm.TryIntegerMagnitudes(cb, out var ib))
+        {
+            Run<Wide448Ops, Magnitude192, Int448>(ia, ea, ib, eb, in shape, BigInteger.One, out coeffs, out exps);
+            return;
+        }
         CoefficientForm.ToBig(ca, out var ba, out var bda);
         CoefficientForm.ToBig(cb, out var bb, out var bdb);
+        // Up to 191-bit numerators: multi-limb accumulation (sums stay below 2^447 for fewer than 2^64 products).
+        if (!ForceBig && CoefficientForm.TryMagnitudes(ba, out var ma) && CoefficientForm.TryMagnitudes(bb, out var mb))
+        {
+            Run<Wide448Ops, Magnitude192, Int448>(ma, ea, mb, eb, in shape, bda * bdb, out coeffs, out exps);
+            return;
+        }
         Run<BigOps, BigInteger, BigInteger>(ba, ea, bb, eb, in shape, bda * bdb, out coeffs, out exps);
     }
 

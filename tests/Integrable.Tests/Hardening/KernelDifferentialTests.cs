@@ -119,6 +119,52 @@ public class KernelDifferentialTests
         }, iter: FuzzSettings.Iterations(300), threads: 1);
     }
 
+    /// <summary>Coefficients of 60–200 bits: the multi-limb path (up to 191 bits) and its hand-over to big integers.</summary>
+    private static readonly Gen<BigInteger> WideCoefficient = Gen.Frequency(
+        (3, Gen.Int[-9, 9].Select(i => new BigInteger(i))),
+        (4, Gen.Select(Gen.Int[60, 200], Gen.Long, Gen.Long, Gen.Long, Gen.Bool).Select((bits, x, y, z, neg) =>
+        {
+            var v = ((new BigInteger((ulong)x) << 128) + (new BigInteger((ulong)y) << 64) + new BigInteger((ulong)z)) | (BigInteger.One << (bits - 1));
+            v &= (BigInteger.One << bits) - 1;
+            return neg ? -v : v;
+        })),
+        (1, Gen.OneOf((BigInteger.One << 191) - 1, -((BigInteger.One << 191) - 1), BigInteger.One << 191, (BigInteger.One << 127) + 1)));
+
+    [Theory]
+    [MemberData(nameof(Algorithms))]
+    public void MultiplyDivide_MultiLimbCoefficients_MatchBigIntegerPath(string algorithm)
+    {
+        var force = Enum.Parse<MultiplyAlgorithm>(algorithm);
+        Gen.Int[1, 5].SelectMany(n => Gen.Select(Gen.Const(n),
+                Gen.Select(WideCoefficient, Gen.Int[-2, 4].Array[n]).Array[1, 12].Select(Normalise),
+                Gen.Select(WideCoefficient, Gen.Int[-1, 3].Array[n]).Array[1, 12].Select(Normalise)))
+            .Sample((vars, a, b) =>
+            {
+                if (a.Count == 0 || b.Count == 0) return;
+                var ring = RingOf(vars);
+                var pa = Build(ring, a);
+                var pb = Build(ring, b);
+                PolynomialMultiply.Force = force;
+                try
+                {
+                    var product = pa * pb;
+                    AssertSame(NaiveProduct(a, b), Read(product));
+                    Assert.True(product.TryDivideExact(pb, out var q));
+                    AssertSame(a, Read(q));
+                    var off = product + ring.One;
+                    bool divides = off.TryDivideExact(pb, out var q2);
+                    PolynomialMultiply.ForceBig = true;
+                    Assert.Equal(divides, off.TryDivideExact(pb, out var q3));
+                    if (divides) Assert.Equal(q3, q2);
+                }
+                finally
+                {
+                    PolynomialMultiply.Force = MultiplyAlgorithm.Auto;
+                    PolynomialMultiply.ForceBig = false;
+                }
+            }, iter: FuzzSettings.Iterations(300), threads: 1);
+    }
+
     [Fact]
     public void Gcd_RandomCommonFactors_MatchesUnivariateEuclidOverQ()
     {

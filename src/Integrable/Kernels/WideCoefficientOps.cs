@@ -1,0 +1,297 @@
+using System.Numerics;
+using System.Runtime.CompilerServices;
+using Integrable.Numbers;
+
+namespace Integrable.Kernels;
+
+/// <summary>A coefficient of at most 191 bits in sign–magnitude form (three 64-bit limbs and a sign): the
+/// input form of the multi-limb path, which takes over from the word paths when coefficients outgrow
+/// 63 bits (Somos-type iterates reach 100–200 bits) and keeps big integers out of the inner loops.</summary>
+internal struct Magnitude192
+{
+    public ulong L0, L1, L2;
+    public bool Negative;
+
+    /// <summary>The largest supported bit length of a magnitude.</summary>
+    public const int MaxBits = 191;
+
+    public static bool TryFrom(in BigInteger value, out Magnitude192 result)
+    {
+        result = default;
+        var abs = BigInteger.Abs(value);
+        if (abs.GetBitLength() > MaxBits) return false;
+        Span<byte> bytes = stackalloc byte[24];
+        bytes.Clear();
+        abs.TryWriteBytes(bytes, out _, isUnsigned: true, isBigEndian: false);
+        result.L0 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes);
+        result.L1 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[8..]);
+        result.L2 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[16..]);
+        result.Negative = value.Sign < 0;
+        return true;
+    }
+
+    public readonly BigInteger ToBigInteger()
+    {
+        Span<byte> bytes = stackalloc byte[24];
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes, L0);
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes[8..], L1);
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes[16..], L2);
+        var m = new BigInteger(bytes, isUnsigned: true, isBigEndian: false);
+        return Negative ? -m : m;
+    }
+}
+
+/// <summary>A signed 448-bit two's-complement accumulator (seven limbs): holds any sum of fewer than
+/// 2^64 products of two <see cref="Magnitude192"/> values plus a dividend below 2^446.</summary>
+internal struct Int448
+{
+    public ulong W0, W1, W2, W3, W4, W5, W6;
+
+    public readonly bool IsZero => (W0 | W1 | W2 | W3 | W4 | W5 | W6) == 0;
+
+    public readonly BigInteger ToBigInteger()
+    {
+        Span<byte> bytes = stackalloc byte[56];
+        var w = (ReadOnlySpan<ulong>)[W0, W1, W2, W3, W4, W5, W6];
+        for (int i = 0; i < 7; i++) System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes[(8 * i)..], w[i]);
+        return new BigInteger(bytes, isUnsigned: false, isBigEndian: false);
+    }
+
+    /// <summary>The value in sign–magnitude form, or false when it needs more than 191 bits.</summary>
+    public readonly bool TryToMagnitude(out Magnitude192 result)
+    {
+        result = default;
+        bool negative = (long)W6 < 0;
+        ulong w0 = W0, w1 = W1, w2 = W2, w3 = W3, w4 = W4, w5 = W5, w6 = W6;
+        if (negative)
+        {
+            // Two's-complement negation: invert and add one.
+            w0 = ~w0; w1 = ~w1; w2 = ~w2; w3 = ~w3; w4 = ~w4; w5 = ~w5; w6 = ~w6;
+            if (++w0 == 0 && ++w1 == 0 && ++w2 == 0 && ++w3 == 0 && ++w4 == 0 && ++w5 == 0) ++w6;
+        }
+        if ((w3 | w4 | w5 | w6) != 0 || (long)w2 < 0) return false;
+        result.L0 = w0; result.L1 = w1; result.L2 = w2;
+        result.Negative = negative;
+        return true;
+    }
+
+    /// <summary>The accumulator holding <paramref name="value"/>, or false when |value| ≥ 2^446.</summary>
+    public static bool TryFrom(in BigInteger value, out Int448 result)
+    {
+        result = default;
+        if (BigInteger.Abs(value).GetBitLength() > 446) return false;
+        Span<byte> bytes = stackalloc byte[56];
+        bytes.Fill(value.Sign < 0 ? (byte)0xFF : (byte)0);
+        value.TryWriteBytes(bytes, out _, isUnsigned: false, isBigEndian: false);
+        result.W0 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes);
+        result.W1 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[8..]);
+        result.W2 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[16..]);
+        result.W3 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[24..]);
+        result.W4 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[32..]);
+        result.W5 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[40..]);
+        result.W6 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[48..]);
+        return true;
+    }
+}
+
+/// <summary>Multi-limb coefficients (<see cref="Magnitude192"/>) accumulated in <see cref="Int448"/>.
+/// Products use one, four or nine 64×64-bit multiplications depending on the operands' limb counts,
+/// and carries stop as soon as they vanish, so small coefficients inside a wide polynomial stay cheap.</summary>
+internal struct Wide448Ops : ICoefficientOps<Magnitude192, Int448>
+{
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static void MulAdd(ref Int448 acc, Magnitude192 a, Magnitude192 b)
+    {
+        if (a.Negative != b.Negative) Accumulate(ref acc, in a, in b, subtract: true);
+        else Accumulate(ref acc, in a, in b, subtract: false);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static void MulSub(ref Int448 acc, Magnitude192 a, Magnitude192 b)
+    {
+        if (a.Negative != b.Negative) Accumulate(ref acc, in a, in b, subtract: false);
+        else Accumulate(ref acc, in a, in b, subtract: true);
+    }
+
+    /// <summary>acc ± |a|·|b|.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Accumulate(ref Int448 acc, in Magnitude192 a, in Magnitude192 b, bool subtract)
+    {
+        if ((a.L1 | a.L2 | b.L1 | b.L2) == 0)
+        {
+            ulong hi = Math.BigMul(a.L0, b.L0, out ulong lo);
+            if (subtract) Sub2(ref acc, lo, hi); else Add2(ref acc, lo, hi);
+            return;
+        }
+        AccumulateWide(ref acc, in a, in b, subtract);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Add2(ref Int448 a, ulong lo, ulong hi)
+    {
+        ulong s0 = a.W0 + lo;
+        ulong c = s0 < lo ? 1UL : 0UL;
+        ulong t = a.W1 + hi;
+        ulong c1 = t < hi ? 1UL : 0UL;
+        ulong s1 = t + c;
+        c1 |= s1 < t ? 1UL : 0UL;
+        a.W0 = s0;
+        a.W1 = s1;
+        if (c1 != 0) CarryFrom2(ref a);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Sub2(ref Int448 a, ulong lo, ulong hi)
+    {
+        ulong s0 = a.W0 - lo;
+        ulong b = a.W0 < lo ? 1UL : 0UL;
+        ulong t = a.W1 - hi;
+        ulong b1 = a.W1 < hi ? 1UL : 0UL;
+        ulong s1 = t - b;
+        b1 |= t < b ? 1UL : 0UL;
+        a.W0 = s0;
+        a.W1 = s1;
+        if (b1 != 0) BorrowFrom2(ref a);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void CarryFrom2(ref Int448 a)
+    {
+        if (++a.W2 != 0) return;
+        if (++a.W3 != 0) return;
+        if (++a.W4 != 0) return;
+        if (++a.W5 != 0) return;
+        ++a.W6;
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void BorrowFrom2(ref Int448 a)
+    {
+        if (a.W2-- != 0) return;
+        if (a.W3-- != 0) return;
+        if (a.W4-- != 0) return;
+        if (a.W5-- != 0) return;
+        a.W6--;
+    }
+
+    /// <summary>The general product: schoolbook over the operands' limbs into six limbs, then one
+    /// add or subtract with carry over all seven.</summary>
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    private static void AccumulateWide(ref Int448 acc, in Magnitude192 a, in Magnitude192 b, bool subtract)
+    {
+        Span<ulong> x = [a.L0, a.L1, a.L2];
+        Span<ulong> y = [b.L0, b.L1, b.L2];
+        int nx = a.L2 != 0 ? 3 : a.L1 != 0 ? 2 : 1;
+        int ny = b.L2 != 0 ? 3 : b.L1 != 0 ? 2 : 1;
+        Span<ulong> p = stackalloc ulong[6];
+        p.Clear();
+        for (int i = 0; i < nx; i++)
+        {
+            ulong carry = 0, xi = x[i];
+            for (int j = 0; j < ny; j++)
+            {
+                ulong hi = Math.BigMul(xi, y[j], out ulong lo);
+                ulong s = p[i + j] + lo;
+                hi += s < lo ? 1UL : 0UL;
+                ulong s2 = s + carry;
+                hi += s2 < s ? 1UL : 0UL;
+                p[i + j] = s2;
+                carry = hi;
+            }
+            p[i + ny] = carry;
+        }
+        Span<ulong> w = [acc.W0, acc.W1, acc.W2, acc.W3, acc.W4, acc.W5, acc.W6];
+        if (!subtract)
+        {
+            ulong c = 0;
+            for (int k = 0; k < 6; k++)
+            {
+                ulong s = w[k] + p[k];
+                ulong c1 = s < p[k] ? 1UL : 0UL;
+                ulong s2 = s + c;
+                c1 |= s2 < s ? 1UL : 0UL;
+                w[k] = s2;
+                c = c1;
+            }
+            w[6] += c;
+        }
+        else
+        {
+            ulong bw = 0;
+            for (int k = 0; k < 6; k++)
+            {
+                ulong d = w[k] - p[k];
+                ulong b1 = w[k] < p[k] ? 1UL : 0UL;
+                ulong d2 = d - bw;
+                b1 |= d < bw ? 1UL : 0UL;
+                w[k] = d2;
+                bw = b1;
+            }
+            w[6] -= bw;
+        }
+        acc.W0 = w[0]; acc.W1 = w[1]; acc.W2 = w[2]; acc.W3 = w[3]; acc.W4 = w[4]; acc.W5 = w[5]; acc.W6 = w[6];
+    }
+
+    public static void MulAddRow(ref Int448 dest, Magnitude192 a, ref Magnitude192 b, ref nint off, int count)
+    {
+        for (int j = 0; j < count; j++)
+            MulAdd(ref Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)), a, Unsafe.Add(ref b, j));
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulSubBlock(ref Int448 buf, ref Magnitude192 a, ref int la, int na, ref Magnitude192 b, ref int lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+        {
+            ref Int448 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
+            var ai = Unsafe.Add(ref a, i);
+            for (int j = 0; j < nb; j++)
+                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    public static void MulAddBlock(ref Int448 buf, ref Magnitude192 a, ref int la, int na, ref Magnitude192 b, ref nint lb, int nb)
+    {
+        for (int i = 0; i < na; i++)
+            MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
+    }
+
+    public static void Set(out Int448 acc, Magnitude192 a)
+    {
+        acc = default;
+        var one = new Magnitude192 { L0 = 1 };
+        if (a.Negative) Accumulate(ref acc, in a, in one, subtract: true);
+        else Accumulate(ref acc, in a, in one, subtract: false);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static bool IsZero(in Int448 acc) => acc.IsZero;
+
+    public static BigInteger ToBigInteger(in Int448 acc) => acc.ToBigInteger();
+
+    public static Rational ToRational(in Int448 acc, in BigInteger denominator)
+    {
+        // Most coefficients of a wide polynomial are still small: read them without BigInteger.
+        ulong sign = (ulong)((long)acc.W1 >> 63);
+        if (acc.W2 == sign && acc.W3 == sign && acc.W4 == sign && acc.W5 == sign && acc.W6 == sign && acc.W1 == sign
+            && (long)acc.W0 >> 63 == (long)sign && denominator.IsOne)
+            return new Rational((long)acc.W0);
+        return denominator.IsOne ? new Rational(acc.ToBigInteger()) : new Rational(acc.ToBigInteger(), denominator);
+    }
+
+    public static int TryDivideExact(in Int448 acc, Magnitude192 divisor, Magnitude192 limit, out Magnitude192 quotient)
+    {
+        quotient = default;
+        if ((divisor.L0 == 1) & ((divisor.L1 | divisor.L2) == 0))
+        {
+            // Unit divisor (the usual monic leading coefficient): the quotient is ±acc.
+            if (!acc.TryToMagnitude(out quotient)) return 2;
+            if (divisor.Negative && (quotient.L0 | quotient.L1 | quotient.L2) != 0) quotient.Negative = !quotient.Negative;
+            return 0;
+        }
+        var q = BigInteger.DivRem(acc.ToBigInteger(), divisor.ToBigInteger(), out var r);
+        if (!r.IsZero) return 1;
+        return Magnitude192.TryFrom(q, out quotient) ? 0 : 2;
+    }
+}

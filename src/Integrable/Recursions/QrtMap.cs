@@ -19,7 +19,7 @@ namespace Integrable.Recursions;
 /// (any A₀, A₁): the map (x, y) ↦ (x̃, ỹ) with ỹ = (g₁(x̃) − y g₂(x̃)) / (g₂(x̃) − y g₃(x̃)) and
 /// g = (A₀ᵀX̃) × (A₁ᵀX̃), the composition of the two switches along the fibres of K.</para>
 /// <para>The density ρ = 1/(XᵀA₁Y) is checked with <see cref="RationalMap.DensityRatio"/>: the map sends
-/// ρ dx dy to ±ρ dx dy (−1 for the symmetric map, which reverses orientation).</para>
+/// ρ dx dy to ±ρ dx dy; the sign is computed exactly and returned in <see cref="DensityRatio"/>.</para>
 /// <para>Matrix entries may be rational functions of parameters (any variables other than x and y).</para>
 /// </remarks>
 /// <example><code>

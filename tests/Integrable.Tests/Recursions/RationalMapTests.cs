@@ -165,6 +165,14 @@ public class RationalMapTests
     }
 
     [Fact]
+    public void ToRecurrenceSystem_PeriodicityAnalysisFindsFive()
+    {
+        // Period 5 of the Lyness map (Lyness 1942), found by the existing analysis on the map's system.
+        var report = Integrable.Analyses.Periodicity.Find(Lyness.ToRecurrenceSystem(), 8);
+        Assert.Equal(5, report.Period);
+    }
+
+    [Fact]
     public void ToProgram_EvaluatesInDoubles()
     {
         var p = Lyness.ToProgram();

@@ -21,7 +21,8 @@ internal static partial class PolynomialDivide
     /// <para>Accumulators start from the dividend's coefficients (given already in accumulator form).
     /// Every partial sum is bounded by max|P| + (Σ|q|)·max|D|; the running Σ|q| is checked against
     /// <paramref name="qSumLimit"/> and <see cref="DivideStatus.TooLarge"/> asks the caller for a
-    /// wider accumulator.</para>
+    /// wider accumulator; <see cref="DivideStatus.QuotientTooLarge"/> (a quotient coefficient outside
+    /// the coefficient type) sends it to big integers.</para>
     /// </remarks>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static DivideStatus DivideDense<TOps, TC, TAcc>(
@@ -108,7 +109,8 @@ internal static partial class PolynomialDivide
                 int st = TOps.TryDivideExact(in buf[k], lc, limit, out TC q);
                 if (st == 1) return DivideStatus.NotDivisible;
                 qSum += magnitude(q);
-                if (st == 2 || qSum > qSumLimit) return DivideStatus.TooLarge;
+                if (st == 2) return DivideStatus.QuotientTooLarge;
+                if (qSum > qSumLimit) return DivideStatus.TooLarge;
                 buf[k] = default!;
                 if (qCount == qi.Length)
                 {

@@ -11,8 +11,11 @@ internal enum DivideStatus
     Exact,
     /// <summary>The divisor does not divide the dividend (a definite answer).</summary>
     NotDivisible,
-    /// <summary>A quotient coefficient is too large for the chosen representation; retry wider.</summary>
+    /// <summary>A partial sum could exceed the chosen accumulator; retry with a wider accumulator.</summary>
     TooLarge,
+    /// <summary>A quotient coefficient does not fit the coefficient type (a word): every word-coefficient
+    /// accumulator would stop at the same term, so the caller goes straight to big integers.</summary>
+    QuotientTooLarge,
 }
 
 /// <summary>Exact division of sparse polynomials by the heap method (Monagan and Pearce, "Sparse
@@ -110,7 +113,8 @@ internal static partial class PolynomialDivide
             int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
             if (st == 1) return DivideStatus.NotDivisible;
             qSum += magnitude(q);
-            if (st == 2 || qSum > qSumLimit) return DivideStatus.TooLarge;
+            if (st == 2) return DivideStatus.QuotientTooLarge;
+            if (qSum > qSumLimit) return DivideStatus.TooLarge;
             if (qCount == qe.Length)
             {
                 int size = qe.Length * 2;
@@ -248,7 +252,8 @@ internal static partial class PolynomialDivide
             int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
             if (st == 1) return DivideStatus.NotDivisible;
             qSum += magnitude(q);
-            if (st == 2 || qSum > qSumLimit) return DivideStatus.TooLarge;
+            if (st == 2) return DivideStatus.QuotientTooLarge;
+            if (qSum > qSumLimit) return DivideStatus.TooLarge;
             if (qCount == qc.Length)
             {
                 int size = qc.Length * 2;

@@ -23,6 +23,22 @@ public sealed class LaurentPolynomialDivisionTests
 
     [Theory]
     [MemberData(nameof(Algorithms))]
+    public void TryDivideExact_QuotientBeyondWordWithWideDividend_FallsBackToBigIntegers(string algorithm)
+    {
+        // Divisor with word coefficients, dividend below 2^126, quotient with a 70-bit coefficient: the
+        // word-coefficient attempt stops (QuotientTooLarge) and big integers finish the division.
+        var ring = new LaurentPolynomialRing("x", "y");
+        var big = new Rational(BigInteger.Pow(2, 70) + 12345);
+        var q = ring.Variable("x") * ring.Variable("x") * big + ring.Variable("y") * new Rational(-7) + ring.One * big;
+        var d = ring.Variable("x") * new Rational(3) + ring.Variable("y") * new Rational(5) + ring.One;
+        var p = q * d;
+        Assert.True(WithDivision(Parse(algorithm), () => p.TryDivideExact(d, out var got) && got == q));
+        var p2 = p + ring.Variable("y");
+        Assert.False(WithDivision(Parse(algorithm), () => p2.TryDivideExact(d, out _)));
+    }
+
+    [Theory]
+    [MemberData(nameof(Algorithms))]
     public void TryDivideExact_EachAlgorithm_RecoversFactorOrFails(string algorithm)
     {
         var ring = new LaurentPolynomialRing("x", "y", "z");

@@ -415,7 +415,15 @@ internal static partial class PolynomialDivide
                 {
                     var wideScale = new Rational(bdb, bda * bg);
                     var wide = new Rational[qm!.Length];
-                    for (int i = 0; i < wide.Length; i++) wide[i] = new Rational(qm[i].ToBigInteger()) * wideScale;
+                    bool unit = wideScale == Rational.One;
+                    for (int i = 0; i < wide.Length; i++)
+                    {
+                        var m = qm[i];
+                        var value = (m.L1 | m.L2) == 0 && m.L0 <= long.MaxValue
+                            ? new Rational(m.Negative ? -(long)m.L0 : (long)m.L0)
+                            : new Rational(m.ToBigInteger());
+                        wide[i] = unit ? value : value * wideScale;
+                    }
                     return ctx.Finish(wide, qem, out coeffs, out exps);
                 }
             }

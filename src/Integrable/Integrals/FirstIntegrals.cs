@@ -146,14 +146,15 @@ public static class FirstIntegrals
         // Darboux polynomials for cofactors built from the factors of the denominators and of J.
         var factors = FactorPool(map, jac);
         var fieldRng = new Random(options.RandomSeed + 1);
+        var seen = new HashSet<RationalFunction>();
         foreach (var exponents in ExponentVectors(factors.Count, options.MaxCofactorExponent))
             foreach (int sign in new[] { 1, -1 })
             {
                 clock.Check();
-                if (sign > 0 && exponents.All(e => e == 0)) continue;
                 var c = map.Field.FromInteger(sign);
                 for (int i = 0; i < factors.Count; i++)
                     if (exponents[i] != 0) c *= map.Field.FromPolynomial(factors[i]).Pow(exponents[i]);
+                if (c.IsOne || !seen.Add(c)) continue;
                 var solverC = new AnsatzSolver(map, degree, includeConstant: true, [c], options, clock, rng);
                 int upper = solverC.UpperBound();
                 if (upper == 0) continue;
@@ -192,7 +193,7 @@ public static class FirstIntegrals
             f = f.PrimitivePart;
             for (int i = 0; i < pool.Count; i++)
             {
-                var g = pool[i].Gcd(f);
+                var g = pool[i].Gcd(f, MonomialFactor.Keep);
                 if (g.IsConstant) continue;
                 if (g == pool[i] && g == f) return;
                 var a = pool[i].DivideExact(g).Quotient;

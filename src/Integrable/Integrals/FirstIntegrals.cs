@@ -145,9 +145,12 @@ public static class FirstIntegrals
 
         // Darboux polynomials for cofactors built from the factors of the denominators and of J.
         var factors = FactorPool(map, jac);
+        // Keep the number of cofactors tried moderate: (2E+1)^s·2 with s factors.
+        int bound = options.MaxCofactorExponent;
+        while (bound > 1 && Math.Pow(2 * bound + 1, factors.Count) > 5000) bound--;
         var fieldRng = new Random(options.RandomSeed + 1);
         var seen = new HashSet<RationalFunction>();
-        foreach (var exponents in ExponentVectors(factors.Count, options.MaxCofactorExponent))
+        foreach (var exponents in ExponentVectors(factors.Count, bound))
             foreach (int sign in new[] { 1, -1 })
             {
                 clock.Check();

@@ -120,7 +120,15 @@ public sealed class IntegralsReport : IAnalysisReport
         if (Map.Parameters.Length > 0) sb.Append("; parameters: ").Append(string.Join(", ", Map.Parameters));
         sb.AppendLine();
         sb.AppendLine(CultureInfo.InvariantCulture, $"polynomial integrals of degree ≤ {Degree}: {PolynomialIntegrals.Length}{(IsComplete ? " (complete)" : "")}");
-        foreach (var i in PolynomialIntegrals) sb.Append("  I = ").AppendLine(i.ToString());
+        if (!Map.IsAutonomous)
+            sb.AppendLine(CultureInfo.InvariantCulture, $"(periodic coefficients: I_j is the integral on states x_n, … with n ≡ j mod {Map.Period}; I_(j+1)∘φ_j = I_j)");
+        foreach (var i in PolynomialIntegrals)
+        {
+            if (Map.IsAutonomous) sb.Append("  I = ").AppendLine(i.ToString());
+            else
+                for (int j = 0; j < i.Phases.Length; j++)
+                    sb.Append(CultureInfo.InvariantCulture, $"  {(j == 0 ? "" : " ")}I_{j} = ").AppendLine(i.Phases[j].ToString());
+        }
         if (RationalSearched)
         {
             sb.AppendLine(CultureInfo.InvariantCulture, $"rational integrals: {RationalIntegrals.Length}");

@@ -296,4 +296,32 @@ public class FirstIntegralsTests
         Assert.Contains("I_{1}", r.ToLatex());
         Assert.Contains("exact identity", r.Verification);
     }
+
+    private sealed class ListProgress : IProgress<Integrable.Analyses.AnalysisProgress>
+    {
+        public List<Integrable.Analyses.AnalysisProgress> Items { get; } = [];
+        public void Report(Integrable.Analyses.AnalysisProgress value) => Items.Add(value);
+    }
+
+    [Fact]
+    public void Find_Progress_ReportsEachStage()
+    {
+        var progress = new ListProgress();
+        FirstIntegrals.Find(Recurrence.Parse("Q_{n+1} Q_{n-1} = Q_n^2 + 1"), IntegralOptions.Default with { Degree = 2, Rational = true }, progress);
+        Assert.Equal(3, progress.Items.Count);
+        Assert.All(progress.Items, p => Assert.Equal("integrals", p.Analysis));
+    }
+
+    [Fact]
+    public void Find_System_IntegralInBothUnknowns()
+    {
+        // Derivation checked here: for u_{n+1} = v_n, v_{n+1} = −u_n + 1/v_n the product p = uv maps to 1 − uv,
+        // so uv(1 − uv) is conserved; up to degree 4 it spans the integrals (sign and constant normalised).
+        var r = FirstIntegrals.Find(RecurrenceSystem.Parse("u_{n+1} = v_n; v_{n+1} = -u_n + 1/v_n"), IntegralOptions.Default with { Degree = 4 });
+        Assert.Equal(["u_n", "v_n"], r.Map.StateVariables.ToArray());
+        Assert.True(r.IsComplete);
+        var i = Assert.Single(r.PolynomialIntegrals);
+        Assert.Equal(In(r.Map, "u_n^2 v_n^2 - u_n v_n"), i.Value);
+        Assert.True(Preserved(r.Map, i.Value));
+    }
 }

@@ -324,4 +324,20 @@ public class FirstIntegralsTests
         Assert.Equal(In(r.Map, "u_n^2 v_n^2 - u_n v_n"), i.Value);
         Assert.True(Preserved(r.Map, i.Value));
     }
+
+    [Fact]
+    public void Find_BenchmarkMapDegree8_IntegralAndItsSquare()
+    {
+        // The W6 map (our own scenario) is the symmetric QRT normal form x_{n+1} + x_{n-1} = −(δy + ε)/(αy² + γ) with
+        // α = γ = 1, δ = −k, ε = −1 (QRT 1988), integral x²y² + x² + y² − kxy − x − y; up to degree 8 the space is
+        // spanned by I and I² (modulo constants).
+        var r = Find("x_{n+1} + x_{n-1} = (k x_n + 1)/(x_n^2 + 1)", 8);
+        Assert.True(r.IsComplete);
+        Assert.Equal(2, r.PolynomialIntegrals.Length);
+        var i = In(r.Map, "x_n^2 x_{n+1}^2 + x_n^2 + x_{n+1}^2 - k x_n x_{n+1} - x_n - x_{n+1}");
+        Assert.Equal(i, r.PolynomialIntegrals[0].Value);
+        Assert.Equal(8, r.PolynomialIntegrals[1].Degree);
+        Assert.True(Dependent(r.Map, r.PolynomialIntegrals[1].Value, i));
+        Assert.Equal(1, r.Independent);
+    }
 }

@@ -107,6 +107,21 @@ public static class FirstIntegrals
         public string? LimitMessage { get; set; }
     }
 
+    /// <summary>Checks exactly whether a function is a first integral of an autonomous map: f(φ(x)) = f(x) as
+    /// rational functions over Q(parameters).</summary>
+    /// <param name="map">The map (autonomous).</param>
+    /// <param name="candidate">A rational function over <see cref="IntegralMap.Field"/>.</param>
+    /// <returns>True when the identity holds.</returns>
+    /// <exception cref="ArgumentException">The map is periodic, or the candidate belongs to another field.</exception>
+    public static bool IsIntegral(IntegralMap map, RationalFunction candidate)
+    {
+        ArgumentNullException.ThrowIfNull(map);
+        ArgumentNullException.ThrowIfNull(candidate);
+        if (!map.IsAutonomous) throw new ArgumentException($"the map has {map.Period} phases; check each pair I_(j+1)∘φ_j = I_j instead", nameof(map));
+        if (!candidate.Field.Equals(map.Field)) throw new ArgumentException($"the candidate lives in {candidate.Field}, the map in {map.Field}", nameof(candidate));
+        return (candidate.Compose(map.Substitution(0)) - candidate).IsZero;
+    }
+
     internal static string ProofText(IntegralMap map) =>
         (map.IsAutonomous ? "exact identity I∘φ = I" : $"exact identities I_(j+1)∘φ_j = I_j for the {map.Period} phases") +
         $" over Q({string.Join(", ", map.Field.Variables)})";

@@ -340,4 +340,14 @@ public class FirstIntegralsTests
         Assert.True(Dependent(r.Map, r.PolynomialIntegrals[1].Value, i));
         Assert.Equal(1, r.Independent);
     }
+
+    [Fact]
+    public void IsIntegral_PublishedAndPerturbed_TrueThenFalse()
+    {
+        // Lyness 1942; Kocic–Ladas 1993.
+        var map = IntegralMap.FromRecurrence(Recurrence.Parse("x_{n+1} x_{n-1} = a + x_n"));
+        var i = In(map, "(x_n + 1)(x_{n+1} + 1)(x_n + x_{n+1} + a)/(x_n x_{n+1})");
+        Assert.True(FirstIntegrals.IsIntegral(map, i));
+        Assert.False(FirstIntegrals.IsIntegral(map, i + In(map, "x_n")));
+    }
 }

@@ -2,16 +2,17 @@ using Integrable.Integrals;
 
 namespace Integrable.Cli;
 
-/// <summary><c>integrable integrals "&lt;equation&gt;" [--degree D] [--rational] [--json | --latex]</c>: proven first integrals.</summary>
+/// <summary><c>integrable integrals "&lt;equation&gt;" [--degree D] [--var-degree D] [--rational] [--json | --latex]</c>: proven first integrals.</summary>
 internal sealed class IntegralsCommand : CliCommand
 {
     public override string Name => "integrals";
     public override string Summary => "first integrals up to a degree (proven by exact identities), rational integrals from Darboux polynomials, invariant measures";
-    public override string Usage => "\"<equation>\" [--degree D] [--rational] [--darboux-degree D] [--set name=value,...] [--periodic \"name=v0,v1,...\"] [--time-limit S] [--json | --latex]";
+    public override string Usage => "\"<equation>\" [--degree D] [--var-degree D] [--rational] [--darboux-degree D] [--set name=value,...] [--periodic \"name=v0,v1,...\"] [--time-limit S] [--json | --latex]";
     public override string Example => "integrable integrals \"x_{n+1} + x_{n-1} = 2 m x_n/(1 - x_n^2)\" --degree 4 --json";
     public override IReadOnlyList<CliOption> Options { get; } =
     [
         new("degree", "D", "largest total degree of a polynomial integral (default 4)"),
+        new("var-degree", "D", "largest degree in each single unknown (e.g. 2 for biquadratic integrals)"),
         new("rational", null, "also search Darboux polynomials, rational integrals and invariant measures"),
         new("darboux-degree", "D", "largest degree of a Darboux polynomial (default: --degree)"),
         new("set", "name=value,...", "fix parameters to rational values"),
@@ -28,7 +29,11 @@ internal sealed class IntegralsCommand : CliCommand
         var input = LaurentCommand.ReadInput(args.Positional(0, "equation (e.g. \"x_{n+1} x_{n-1} = a + x_n\")"), allowLattice: false);
         var budget = LaurentCommand.ReadBudget(args, 500_000);
         if (budget.TimeLimit is null) budget = budget with { TimeLimit = TimeSpan.FromSeconds(60) };
-        var options = IntegralOptions.Default with { Degree = degree, Rational = args.Has("rational"), DarbouxDegree = darboux, Budget = budget };
+        int? varDegree = args.Has("var-degree") ? args.GetInt("var-degree", degree, 1, 40) : null;
+        var options = IntegralOptions.Default with
+        {
+            Degree = degree, MaxVariableDegree = varDegree, Rational = args.Has("rational"), DarbouxDegree = darboux, Budget = budget,
+        };
         var fixedValues = LaurentCommand.ReadParameters(args, input.Parameters);
         IntegralMap map;
         try

@@ -44,6 +44,7 @@ internal sealed class AnsatzSolver
         _rng = rng;
         _primeCursor = rng.Next(0, 40);
         XMonomials = Monomials(map.Dimension, _minDegree, degree);
+        if (options.MaxVariableDegree is { } m) XMonomials.RemoveAll(a => a.Any(e => e > m));
     }
 
     private int K => _map.Dimension;

@@ -77,6 +77,7 @@ public static class FirstIntegrals
         if (options.DarbouxDegree is { } dd) ArgumentOutOfRangeException.ThrowIfLessThan(dd, 1, nameof(options));
         ArgumentOutOfRangeException.ThrowIfNegative(options.MaxCofactorExponent, nameof(options));
         ArgumentOutOfRangeException.ThrowIfNegative(options.MaxParameterDegree, nameof(options));
+        if (options.MaxVariableDegree is { } mv) ArgumentOutOfRangeException.ThrowIfLessThan(mv, 1, nameof(options));
         var clock = new BudgetClock(options.Budget, cancellation);
         var state = new SearchState(map, options);
         try

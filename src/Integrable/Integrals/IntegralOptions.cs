@@ -16,6 +16,10 @@ public sealed record IntegralOptions
     /// <summary>Largest total degree in the state variables of a polynomial integral (and, by default, of a Darboux polynomial).</summary>
     public int Degree { get; init; } = 4;
 
+    /// <summary>Largest degree in each single state variable (a multidegree bound, e.g. 2 for biquadratic
+    /// integrals), or null for none; applies to polynomial integrals and Darboux polynomials.</summary>
+    public int? MaxVariableDegree { get; init; }
+
     /// <summary>Also search Darboux polynomials, rational integrals (ratios with equal cofactors) and invariant measures.</summary>
     public bool Rational { get; init; }
 

@@ -350,4 +350,17 @@ public class FirstIntegralsTests
         Assert.True(FirstIntegrals.IsIntegral(map, i));
         Assert.False(FirstIntegrals.IsIntegral(map, i + In(map, "x_n")));
     }
+
+    [Fact]
+    public void Find_MultidegreeBound_BiquadraticOnly()
+    {
+        // McMillan 1971 (see above): with degree ≤ 2 in each variable the integral is still found; with degree ≤ 1
+        // in each variable (total 4) there is none, and the search says so completely.
+        var options = IntegralOptions.Default with { Degree = 4, MaxVariableDegree = 2 };
+        var r = FirstIntegrals.Find(Recurrence.Parse("x_{n+1} + x_{n-1} = 2 μ x_n/(1 - x_n^2)"), options);
+        Assert.Single(r.PolynomialIntegrals);
+        r = FirstIntegrals.Find(Recurrence.Parse("x_{n+1} + x_{n-1} = 2 μ x_n/(1 - x_n^2)"), options with { MaxVariableDegree = 1 });
+        Assert.Empty(r.PolynomialIntegrals);
+        Assert.True(r.IsComplete);
+    }
 }

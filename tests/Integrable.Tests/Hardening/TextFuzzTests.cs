@@ -86,7 +86,6 @@ public class TextFuzzTests(ITestOutputHelper output)
     [InlineData(200)]
     [InlineData(201)]
     [InlineData(5_000)]
-    [InlineData(5_000)]
     public void Parse_DeepNesting_ParsesOrIsRefusedCleanly(int depth)
     {
         CheckAll(new string('(', depth) + "x" + new string(')', depth));

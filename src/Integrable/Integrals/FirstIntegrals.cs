@@ -59,6 +59,17 @@ public static class FirstIntegrals
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default) =>
         Find(IntegralMap.FromSystem(system), options, progress, cancellation);
 
+    /// <summary>Searches the integrals of a rational map (a plane map, a QRT map, …).</summary>
+    /// <param name="map">The map.</param>
+    /// <param name="options">Degrees, rational search, budget.</param>
+    /// <param name="progress">Receives progress.</param>
+    /// <param name="cancellation">Cancels the search.</param>
+    /// <returns>The report.</returns>
+    /// <exception cref="OperationCanceledException">Cancelled.</exception>
+    public static IntegralsReport Find(RationalMap map, IntegralOptions? options = null,
+        IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default) =>
+        Find(IntegralMap.FromMap(map), options, progress, cancellation);
+
     /// <summary>Searches the integrals of a map (for periodic maps: tuples (I₀, …, I_{P−1}) with
     /// I_{j+1}∘φ_j = I_j; Darboux polynomials and measures only for autonomous maps).</summary>
     /// <param name="map">The map.</param>
@@ -72,6 +83,7 @@ public static class FirstIntegrals
         IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
         ArgumentNullException.ThrowIfNull(map);
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         options ??= IntegralOptions.Default;
         ArgumentOutOfRangeException.ThrowIfLessThan(options.Degree, 1, nameof(options));
         if (options.DarbouxDegree is { } dd) ArgumentOutOfRangeException.ThrowIfLessThan(dd, 1, nameof(options));

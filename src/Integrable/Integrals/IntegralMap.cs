@@ -245,6 +245,17 @@ public sealed class IntegralMap
         return new IntegralMap(system.Text, field, [.. names], system.Parameters, [[.. comps]]);
     }
 
+    /// <summary>The map of a <see cref="RationalMap"/> (e.g. a QRT map or a plane map built from two rational functions).</summary>
+    /// <param name="map">The map.</param>
+    /// <returns>The same map, with its state variables and parameters.</returns>
+    public static IntegralMap FromMap(RationalMap map)
+    {
+        ArgumentNullException.ThrowIfNull(map);
+        var field = new RationalFunctionField([.. map.StateVariables, .. map.Parameters]);
+        var components = map.Components.Select(field.Embed).ToArray();
+        return new IntegralMap(map.ToString(), field, map.StateVariables, map.Parameters, [[.. components]]);
+    }
+
     /// <summary>A map given by its components.</summary>
     /// <param name="field">The field; its first <c>components.Count</c> variables are the state variables, the rest parameters.</param>
     /// <param name="components">φ₁, …, φ_k over <paramref name="field"/>.</param>

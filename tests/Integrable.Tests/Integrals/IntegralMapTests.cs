@@ -52,3 +52,22 @@ public class IntegralMapTests
         Assert.NotEqual(map.Components(0)[1], map.Components(1)[1]);
     }
 }
+
+public class IntegralMapFromRationalMapTests
+{
+    [Fact]
+    public void Find_QrtMapFromTheLibrary_RecoversItsBiquadraticInvariant()
+    {
+        // QRT from its two matrices (Quispel, Roberts, Thompson, Phys. Lett. A 126 (1988) 419); with these
+        // matrices the map is McMillan's, with invariant x²y² + x² + y² − 2mxy (McMillan 1971).
+        var qrt = Integrable.Recursions.QrtMap.Symmetric("[[1, 0, 1], [0, -2 m, 0], [1, 0, 0]]", "[[0,0,0],[0,0,0],[0,0,1]]");
+        var report = FirstIntegrals.Find(qrt.Map, new IntegralOptions { Degree = 4 });
+        var found = Assert.Single(report.PolynomialIntegrals);
+        var field = report.Map.Field;
+        // The found integral is a constant multiple of the QRT invariant.
+        var ratio = found.Value / field.Embed(qrt.Invariant);
+        Assert.True(ratio.IsConstant, $"{found.Value} is not a multiple of {qrt.Invariant}");
+        Assert.Equal(["x", "y"], report.Map.StateVariables.ToArray());
+        Assert.Equal(["m"], report.Map.Parameters.ToArray());
+    }
+}

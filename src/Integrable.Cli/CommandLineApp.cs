@@ -14,6 +14,8 @@ internal static class CommandLineApp
         new GrowthCommand(),
         new PeriodCommand(),
         new ConfineCommand(),
+        new SeriesCommand(),
+        new TauCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

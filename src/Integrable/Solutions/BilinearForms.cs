@@ -8,7 +8,7 @@ namespace Integrable.Solutions;
 /// <remarks>For each ansatz x_n = C·Π τ_{n+a_i}/Π τ_{n+c_j} of a small family (<see cref="TauAnsatz.SmallFamily"/>),
 /// the substitution is made exactly in the field of rational functions of the shifted τ's; the numerator of
 /// left − right, stripped of monomial factors (which vanish nowhere on τ's that are non-zero), is tested for being of
-/// degree ≤ 2 in the τ's. The identity left − right = monomial × B / denominator is re-checked exactly before a form is
+/// degree 2 in the τ's, up to τ-free terms (bilinear with a constant, as in Q-systems); terms of degree 1 or above 2 reject the ansatz. The identity left − right = monomial × B / denominator is re-checked exactly before a form is
 /// returned. Substitutions that need a first integral to fix a constant are not searched.</remarks>
 public static class BilinearForms
 {
@@ -27,6 +27,25 @@ public static class BilinearForms
             if (form is not null) return form;
         }
         return null;
+    }
+
+    /// <summary>Runs <see cref="Search"/> and wraps the outcome in a report (no tau closed form: that needs data, see
+    /// <see cref="TauFitter"/>).</summary>
+    /// <param name="recurrence">The recursion.</param>
+    /// <param name="family">The ansätze (default <see cref="TauAnsatz.SmallFamily"/>).</param>
+    /// <param name="cancellation">Cancels between ansätze.</param>
+    /// <returns>The report; verified when a bilinear form was found.</returns>
+    public static TauReport Report(Recurrence recurrence, IReadOnlyList<TauAnsatz>? family = null, CancellationToken cancellation = default)
+    {
+        var form = Search(recurrence, family, cancellation);
+        if (form is null)
+            return new TauReport(recurrence.Text, "none found", "none found", "not determined (give boundary or initial data)", [], false,
+                "no ansatz of the family gives a bilinear equation", null,
+                ["searched: " + string.Join("; ", (family ?? TauAnsatz.SmallFamily()).Select(a => a.ToText(recurrence.Unknown, recurrence.Index)))],
+                Analyses.BudgetLimit.None);
+        return new TauReport(recurrence.Text, form.Ansatz.ToText(recurrence.Unknown, recurrence.Index),
+            form.Text + (form.IsHomogeneous ? "" : " (bilinear with inhomogeneous terms)"),
+            "not determined (give boundary or initial data)", [], true, form.Verification, null, [], Analyses.BudgetLimit.None);
     }
 
     /// <summary>Makes one substitution and returns the bilinear form if the result is bilinear, else null.</summary>
@@ -83,6 +102,7 @@ public static class BilinearForms
         {
             int d = 0;
             for (int v = 0; v < tauCount; v++) d += term.Exponents[v];
+            if (d == 1) return null;   // linear terms: not of Hirota type
             maxDeg = Math.Max(maxDeg, d);
             minDeg = Math.Min(minDeg, d);
         }

@@ -13,7 +13,7 @@ internal static partial class TauNames
         shift == 0 ? $"τ_{index}" : shift > 0 ? $"τ_{{{index}+{shift}}}" : $"τ_{{{index}-{-shift}}}";
 
     public static string Show(string text, string index = "n") =>
-        Pattern().Replace(text, m => Term((m.Groups[1].Value == "m" ? -1 : 1) * int.Parse(m.Groups[2].Value, System.Globalization.CultureInfo.InvariantCulture), index));
+        Pattern().Replace(text.Replace("*", " ", StringComparison.Ordinal), m => Term((m.Groups[1].Value == "m" ? -1 : 1) * int.Parse(m.Groups[2].Value, System.Globalization.CultureInfo.InvariantCulture), index));
 
     public static string Show(LaurentPolynomial p, string index = "n") => Show(p.ToString(), index);
 

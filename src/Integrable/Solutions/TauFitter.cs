@@ -156,9 +156,7 @@ public static class TauFitter
         var gr = ToFunction(field, weightRational.Value, lam);
         relations.Insert(0, $"{limitName} = {lr}");
         relations.Insert(1, $"{parameter} = {gr}");
-        var minLambda = gr.Denominator * field.PolynomialRing.Variable(LambdaName) * 0 + gr.Denominator; // placeholder for text below
-        relations.Insert(2, $"minimal polynomial of {LambdaName} over Q({parameter}): {parameter} ({gr.Denominator}) - ({gr.Numerator}) = 0");
-        _ = minLambda;
+        relations.Insert(2, $"minimal polynomial of {LambdaName} over Q({parameter}): {parameter} ({gr.Denominator}) - ({gr.Numerator}) = 0 (irreducible: linear in {parameter} with coprime coefficients)");
         // symbolic verification: λ^n independent
         var residual = EquationResidual.Compile(rec);
         var xsym = field.Variable(PowerName);
@@ -285,11 +283,12 @@ public static class TauFitter
             {
                 var a = p[d];
                 if (a.IsZero) continue;
-                c.Add(d == 0 ? a.ToString() : $"{(a.IsOne ? "" : a + " ")}{(d == 1 ? x : $"{x}^{d}")}");
+                c.Add(d == 0 ? a.ToString() : $"{(a.IsOne ? "" : a == -Rational.One ? "-" : a + " ")}{(d == 1 ? x : $"{x}^{d}")}");
             }
             if (c.Count == 0) continue;
             string coef = c.Count == 1 ? c[0] : "(" + string.Join(" + ", c) + ")";
-            parts.Add(i == 0 ? coef : $"{coef} {(i == 1 ? y : $"{y}^{i}")}");
+            string power = i == 1 ? y : $"{y}^{i}";
+            parts.Add(i == 0 ? coef : coef == "1" ? power : coef == "-1" ? "-" + power : $"{coef} {power}");
         }
         return string.Join(" + ", parts).Replace("+ -", "- ", StringComparison.Ordinal);
     }

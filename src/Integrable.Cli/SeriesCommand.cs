@@ -62,6 +62,10 @@ internal sealed class SeriesCommand : CliCommand
                 solution = SeriesSolver.SolveInitialValue(rec, parameter, initial, 0, options, context.Cancellation);
             }
         }
+        catch (ArgumentException e)
+        {
+            throw new CliUsageException(e.Message.Split(" (Parameter", 2)[0]);
+        }
         catch (SeriesConvergenceException e)
         {
             context.Error.WriteLine($"integrable: {e.Message}");

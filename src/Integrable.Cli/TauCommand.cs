@@ -60,6 +60,10 @@ internal sealed class TauCommand : CliCommand
                 report = BilinearForms.Report(rec, cancellation: context.Cancellation);
             }
         }
+        catch (ArgumentException e)
+        {
+            throw new CliUsageException(e.Message.Split(" (Parameter", 2)[0]);
+        }
         catch (Exception e) when (e is SeriesConvergenceException or BudgetExceededException or SingularStepException)
         {
             context.Error.WriteLine($"integrable: {e.Message}");

@@ -12,7 +12,7 @@ namespace Integrable.Solutions;
 public sealed class SeriesSolution : IAnalysisReport
 {
     internal SeriesSolution(Recurrence recurrence, string parameter, SeriesProblemKind kind, int order, long firstIndex,
-        IReadOnlyList<PowerSeries<Rational>> terms, PowerSeries<Rational>? limit, int window, int newtonOrder,
+        IReadOnlyList<PowerSeries<Rational>> terms, PowerSeries<Rational>? limit, int window,
         string verification, BudgetLimit budgetLimit, TimeSpan elapsed)
     {
         Recurrence = recurrence;
@@ -26,7 +26,6 @@ public sealed class SeriesSolution : IAnalysisReport
         Verification = verification;
         Limit = budgetLimit;
         Elapsed = elapsed;
-        _ = newtonOrder;
     }
 
     /// <summary>The recursion.</summary>

@@ -88,7 +88,7 @@ public static class SeriesSolver
             if (!r.IsZero) throw new InvalidOperationException($"internal error: the equation at {recurrence.TermName(start + j)} has residual {r}");
         }
         return new SeriesSolution(recurrence, parameter, SeriesProblemKind.InitialValue, options.Order, start + k,
-            terms.Skip(k).ToList(), null, 0, 0,
+            terms.Skip(k).ToList(), null, 0,
             $"exact: left − right = O({parameter}^{prec}) over Q for each of the {terms.Count - k} equations on {recurrence.TermName(start)} … {recurrence.TermName(start + terms.Count - 1)}",
             BudgetLimit.None, watch.Elapsed);
     }
@@ -195,7 +195,7 @@ public static class SeriesSolver
                 }
                 int count = Math.Min(options.Count, window);
                 return new SeriesSolution(recurrence, parameter, SeriesProblemKind.BoundaryValue, options.Order, s,
-                    x.Take(count).ToList(), limit, window, k,
+                    x.Take(count).ToList(), limit, window,
                     $"exact: left − right = O({parameter}^{prec}) over Q for all {window} equations of the window {recurrence.TermName(s)} … {recurrence.TermName(s + window - 1)}, " +
                     $"and the last {Math.Max(k - 1, 0)} window term(s) equal the limit to O({parameter}^{prec}), so the sequence continued by the limit satisfies every equation modulo {parameter}^{prec}",
                     BudgetLimit.None, watch.Elapsed);

@@ -37,6 +37,7 @@ public class SeriesCommandTests
     [InlineData("R_n = 1 + g R_n (R_{n-1} + R_{n+1}", "--parameter", "g", "--boundary", "R_0=0")]
     [InlineData("R_n = 1 + g R_n (R_{n-1} + R_{n+1})", "--parameter", "g", "--order", "-3", "--boundary", "R_0=0")]
     [InlineData("R_n = 1 + g R_n (R_{n-1} + R_{n+1})", "--parameter", "g")]
+    [InlineData("R_n = 1 + g R_n (R_{n-1} + n R_{n+1})", "--parameter", "g", "--boundary", "R_0=0")]
     public void BadInput_Exit2_OneLine(params string[] rest)
     {
         var (exit, _, stderr) = Run(["series", .. rest]);

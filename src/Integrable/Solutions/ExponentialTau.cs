@@ -10,9 +10,9 @@ namespace Integrable.Solutions;
 /// over Q(c, λ, parameters); the coefficient of each monomial (λ^n)^a n^b of the numerator of left − right must vanish.
 /// Those coefficients are the returned relations; the sum of relation × monomial is re-checked to equal the numerator.</remarks>
 /// <example><code>
-/// var q = Recurrence.Parse("Q_{n+1} Q_{n-1} = Q_n^2 - 1");
-/// var rel = ExponentialTau.Relations(q, [new ExponentialTerm(1), new ExponentialTerm(-1)]);
-/// // c0 c1 lambda^4 − 2 c0 c1 lambda^2 + c0 c1 + lambda^2 = 0
+/// var y = Recurrence.Parse("y_{n+1} y_{n-1} = y_n^2 - 4");
+/// var rel = ExponentialTau.Relations(y, [new ExponentialTerm(1), new ExponentialTerm(-1)]);
+/// // one relation: c0 c1 (lambda^2 − 1)^2 + 4 lambda^2 = 0, scaled to leading coefficient 1
 /// </code></example>
 public static class ExponentialTau
 {

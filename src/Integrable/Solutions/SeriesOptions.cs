@@ -19,6 +19,10 @@ public sealed record SeriesOptions
     /// <summary>The largest window tried before giving up (default 8192).</summary>
     public int MaxWindow { get; init; } = 8192;
 
+    /// <summary>When true, a boundary-value solution is solved again on a window a quarter larger (at least 4 more indices)
+    /// and the reported terms must agree (an empirical stability check on top of the exact tail check; doubles the cost).</summary>
+    public bool CheckLargerWindow { get; init; }
+
     /// <summary>Values of the parameters other than the weight (by name).</summary>
     public IReadOnlyDictionary<string, Rational>? ParameterValues { get; init; }
 

@@ -194,10 +194,20 @@ public static class SeriesSolver
                     if (!e.IsZero) throw new InvalidOperationException($"internal error: window equation {r} has residual {e}");
                 }
                 int count = Math.Min(options.Count, window);
+                string stability = "";
+                if (options.CheckLargerWindow)
+                {
+                    int larger = window + Math.Max(4, window / 4);
+                    var y = SolveWindow(residual, ring, pars, limit, boundaryIndex, boundaryValues, larger, prec, clock, progress);
+                    for (int i = 0; i < count; i++)
+                        if (!(y[i] - x[i]).Truncate(prec).IsZero)
+                            throw new SeriesConvergenceException($"enlarging the window from {window} to {larger} changed {recurrence.TermName(s + i)}: the window solution is not stable", prec);
+                    stability = $"; solving again on a window of {larger} indices gave the same {count} reported series";
+                }
                 return new SeriesSolution(recurrence, parameter, SeriesProblemKind.BoundaryValue, options.Order, s,
                     x.Take(count).ToList(), limit, window,
                     $"exact: left − right = O({parameter}^{prec}) over Q for all {window} equations of the window {recurrence.TermName(s)} … {recurrence.TermName(s + window - 1)}, " +
-                    $"and the last {Math.Max(k - 1, 0)} window term(s) equal the limit to O({parameter}^{prec}), so the sequence continued by the limit satisfies every equation modulo {parameter}^{prec}",
+                    $"and the last {Math.Max(k - 1, 0)} window term(s) equal the limit to O({parameter}^{prec}), so the sequence continued by the limit satisfies every equation modulo {parameter}^{prec}" + stability,
                     BudgetLimit.None, watch.Elapsed);
             }
             if (window * 2 > options.MaxWindow)

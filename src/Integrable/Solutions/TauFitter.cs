@@ -54,6 +54,30 @@ public static class TauFitter
         options ??= new SeriesOptions();
         options = options with { Count = Math.Max(options.Count, 10) };
         var sol = SeriesSolver.SolveBoundaryValue(recurrence, parameter, boundaryIndex, [boundaryValue], options, cancellation);
+        return FitSeries(sol, boundaryValue, options.ParameterValues, family, cancellation, progress);
+    }
+
+    /// <summary>Fits a tau function to an already computed boundary-value series solution (the series-data route of
+    /// <see cref="FitBoundary"/>; the boundary is the index just before <see cref="SeriesSolution.FirstIndex"/>).</summary>
+    /// <param name="solution">A boundary-value series solution of an order-2 recursion.</param>
+    /// <param name="boundaryValue">The value at index FirstIndex − 1.</param>
+    /// <param name="parameterValues">Values of the parameters other than the weight, as used for the series.</param>
+    /// <param name="family">The ansätze to try (default: the balanced ones of <see cref="TauAnsatz.SmallFamily"/>).</param>
+    /// <param name="cancellation">Cancels between candidates.</param>
+    /// <param name="progress">Receives one report per candidate.</param>
+    /// <returns>The report.</returns>
+    /// <exception cref="ArgumentException">Not a boundary-value solution of an order-2 recursion.</exception>
+    public static TauReport FitSeries(SeriesSolution solution, Rational boundaryValue, IReadOnlyDictionary<string, Rational>? parameterValues = null,
+        IReadOnlyList<TauAnsatz>? family = null, CancellationToken cancellation = default, IProgress<AnalysisProgress>? progress = null)
+    {
+        ArgumentNullException.ThrowIfNull(solution);
+        if (solution.Kind != SeriesProblemKind.BoundaryValue || solution.LimitValue is null || solution.Recurrence.Order != 2)
+            throw new ArgumentException("give a boundary-value series solution of an order-2 recursion", nameof(solution));
+        var sol = solution;
+        var recurrence = sol.Recurrence;
+        string parameter = sol.Parameter;
+        long boundaryIndex = sol.FirstIndex - 1;
+        var options = new SeriesOptions { Order = sol.Order, Count = sol.Terms.Count, ParameterValues = parameterValues };
         var notes = new List<string>();
         string limitName = recurrence.Unknown + "_∞";
         string seriesSummary = $"direct series solution to O({parameter}^{options.Order + 1}) for {recurrence.TermName(sol.FirstIndex)} … {recurrence.TermName(sol.FirstIndex + sol.Terms.Count - 1)} ({sol.Verification})";

@@ -73,9 +73,20 @@ public sealed class TauReport : IAnalysisReport
     /// <inheritdoc/>
     public string ToLatex()
     {
-        static string Esc(string s) => s.Replace("\\", "\\textbackslash{}", StringComparison.Ordinal).Replace("_", "\\_", StringComparison.Ordinal)
-            .Replace("^", "\\^{}", StringComparison.Ordinal).Replace("{", "\\{", StringComparison.Ordinal).Replace("}", "\\}", StringComparison.Ordinal)
-            .Replace("\\\\_", "\\_", StringComparison.Ordinal);
+        static string Esc(string s)
+        {
+            var e = new StringBuilder();
+            foreach (char c in s)
+                e.Append(c switch
+                {
+                    '\\' => "\\textbackslash{}",
+                    '_' or '{' or '}' or '&' or '%' or '$' or '#' => "\\" + c,
+                    '^' => "\\^{}",
+                    '~' => "\\~{}",
+                    _ => c.ToString(),
+                });
+            return e.ToString();
+        }
         var sb = new StringBuilder();
         sb.AppendLine("\\begin{description}");
         sb.AppendLine($"\\item[substitution] \\texttt{{{Esc(Substitution)}}}");

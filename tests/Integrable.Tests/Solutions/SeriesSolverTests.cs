@@ -64,6 +64,14 @@ public class SeriesSolverTests
     }
 
     [Fact]
+    public void SolveBoundaryValue_CheckLargerWindow_ReportsStability()
+    {
+        var sol = SeriesSolver.SolveBoundaryValue(Recurrence.Parse(Quadrangulations), "g", 0, [Rational.Zero],
+            new SeriesOptions { Order = 10, CheckLargerWindow = true });
+        Assert.Contains("solving again on a window of", sol.Verification, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void SolveBoundaryValue_TooSmallWindow_IsEnlarged()
     {
         var rec = Recurrence.Parse(Quadrangulations);

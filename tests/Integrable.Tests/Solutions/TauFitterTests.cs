@@ -32,6 +32,18 @@ public class TauFitterTests
     }
 
     [Fact]
+    public void FitSeries_PrecomputedSeries_SameClosedForm()
+    {
+        // the series-data route gives the same closed form (Bouttier, Di Francesco, Guitter, Nucl. Phys. B 663 (2003) 535)
+        var rec = Recurrence.Parse("R_n = 1 + g R_n (R_{n-1} + R_n + R_{n+1})");
+        var sol = SeriesSolver.SolveBoundaryValue(rec, "g", 0, [Rational.Zero], new SeriesOptions { Order = 16 });
+        var report = TauFitter.FitSeries(sol, Rational.Zero);
+        Assert.True(report.Verified);
+        Assert.Equal("R_n = R_∞ τ_n τ_{n+3} / (τ_{n+1} τ_{n+2})", report.Substitution);
+        Assert.Contains("\\begin{description}", report.ToLatex(), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void FitBoundary_NonZeroBoundary_NotFoundWithReason()
     {
         var rec = Recurrence.Parse("R_n = 1 + g R_n (R_{n-1} + R_n + R_{n+1})");

@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using Integrable.Analyses;
 using Integrable.Numbers;
+using Integrable.RationalFunctions;
 using Integrable.Recursions;
 using Integrable.Series;
 using Integrable.Univariate;
@@ -110,14 +111,23 @@ public static class SeriesSolver
             throw new ArgumentException("a fixed point (constant solution) needs an autonomous recursion: the index appears explicitly", nameof(recurrence));
         var residual = EquationResidual.Compile(recurrence);
         int prec = options.Order + 1;
-        // P(y) = residual at g = 0 with every term equal to y, as a polynomial in y.
-        var yRing = PowerSeriesRing.OverRationals("y");
-        int bound = 64;
-        var yArith = new SeriesArithmetic(yRing, bound);
-        var zeroPars = ParameterSeries(recurrence, parameter, options, yRing, zeroWeight: true);
-        var p = residual.Evaluate(yArith, 0, _ => yRing.X, zeroPars);
-        if (p.IsZero) throw new SeriesConvergenceException($"at {parameter} = 0 every constant is a fixed point: the limit is not determined", 0);
-        var poly = UnivariatePolynomial.FromCoefficients(p.Coefficients);
+        // P(y) = numerator of the residual at g = 0 with every term equal to y, a polynomial in y.
+        var yField = new RationalFunctionField("y");
+        var zeroSeries = ParameterSeries(recurrence, parameter, options, PowerSeriesRing.OverRationals(parameter), zeroWeight: true);
+        var zeroPars = zeroSeries.Select(z => yField.Constant(z.IsZero ? Rational.Zero : z.ConstantTerm)).ToArray();
+        RationalFunction pf;
+        try { pf = residual.Evaluate(yField, 0, _ => yField.Variable(0), zeroPars); }
+        catch (ArithmeticException e)
+        {
+            throw new SeriesConvergenceException($"the constant solutions at {parameter} = 0 cannot be found: {e.Message}", 0);
+        }
+        if (pf.IsZero) throw new SeriesConvergenceException($"at {parameter} = 0 every constant is a fixed point: the limit is not determined", 0);
+        int degree = 0;
+        foreach (var term in pf.Numerator.Terms) degree = Math.Max(degree, term.Exponents[0]);
+        var pc = new Rational[degree + 1];
+        Array.Fill(pc, Rational.Zero);
+        foreach (var term in pf.Numerator.Terms) pc[term.Exponents[0]] += term.Coefficient;
+        var poly = UnivariatePolynomial.FromCoefficients(pc);
         Rational y0;
         var roots = poly.RationalRoots().Where(r => r.Multiplicity == 1).Select(r => r.Root).ToList();
         if (options.LimitAtZero is { } chosen)
@@ -179,7 +189,12 @@ public static class SeriesSolver
         int window = Math.Max(options.Window ?? options.Order + k + 1, options.Count + k);
         while (true)
         {
-            var x = SolveWindow(residual, ring, pars, limit, boundaryIndex, boundaryValues, window, prec, clock, progress);
+            PowerSeries<Rational>[] x;
+            try { x = SolveWindow(residual, ring, pars, limit, boundaryIndex, boundaryValues, window, prec, clock, progress); }
+            catch (Exception e) when (e is ProgramEvaluationException or DivideByZeroException || e is ArgumentException && e is not ArgumentNullException)
+            {
+                throw new SeriesConvergenceException($"an equation of the window divides by a series that vanishes at {parameter} = 0, so the solution is not a power series in {parameter} ({e.Message})", 0);
+            }
             bool tail = true;
             for (int i = Math.Max(0, window - (k - 1)); i < window; i++)
                 if (!(x[i] - limit).Truncate(prec).IsZero) { tail = false; break; }

@@ -72,6 +72,17 @@ public class SeriesSolverTests
     }
 
     [Fact]
+    public void SolveBoundaryValue_EquationWithDivision_SameAsCleared()
+    {
+        // the same equation written with a division by R_n must give the same series
+        var plain = SeriesSolver.SolveBoundaryValue(Recurrence.Parse("W_n = 1 + t W_n (W_{n-1} + W_{n+1})"), "t", 0, [Rational.Zero],
+            new SeriesOptions { Order = 10 });
+        var divided = SeriesSolver.SolveBoundaryValue(Recurrence.Parse("W_n = 1 + t W_n^2 (W_{n-1} + W_{n+1}) / W_n"), "t", 0, [Rational.Zero],
+            new SeriesOptions { Order = 10 });
+        for (int n = 1; n <= 10; n++) Assert.Equal(plain[n], divided[n]);
+    }
+
+    [Fact]
     public void SolveBoundaryValue_TooSmallWindow_IsEnlarged()
     {
         var rec = Recurrence.Parse(Quadrangulations);

@@ -72,6 +72,19 @@ public class TauFitterTests
         Assert.Contains("(-1/3) (1/2)^n", report.Tau, StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData(3, 5, "τ_{n+2} = 11/5 τ_{n+1} - τ_n")]
+    [InlineData(2, 3, "τ_{n+2} = 2 τ_{n+1} - τ_n")]
+    [InlineData(1, 3, "τ_{n+2} = 3 τ_{n+1} - τ_n")]
+    public void FitInitial_QSystemAnyStart_ChebyshevRecurrence(long q0, long q1, string expected)
+    {
+        // Q_{n+1} + Q_{n-1} = (λ + 1/λ) Q_n with λ + 1/λ = (Q_0² + Q_1² − 1)/(Q_0 Q_1) for the A_1 Q-system (common
+        // knowledge: Q_2 = (Q_1² − 1)/Q_0, and the Casoratian Q_{n+1}Q_{n-1} − Q_n² = −1 is conserved).
+        var report = TauFitter.FitInitial(Recurrence.Parse("Q_{n+1} Q_{n-1} = Q_n^2 - 1"), [new Rational(q0), new Rational(q1)]);
+        Assert.True(report.Verified, report.ToText());
+        Assert.Contains(expected, report.Relations);
+    }
+
     [Fact]
     public void FitInitial_OddFibonacci_FindsLinearRecurrence()
     {

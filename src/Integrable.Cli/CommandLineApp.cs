@@ -15,6 +15,8 @@ internal static class CommandLineApp
         new PeriodCommand(),
         new ConfineCommand(),
         new IntegralsCommand(),
+        new SeriesCommand(),
+        new TauCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

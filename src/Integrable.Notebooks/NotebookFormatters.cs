@@ -61,7 +61,7 @@ public static class NotebookFormatters
 
             Formatter.Register<IAnalysisReport>((r, w) => w.Write(ReportHtml.Of(r)), Html);
             Formatter.Register<IAnalysisReport>((r, w) => w.Write(MathLatex.Display(r.ToLatex())), Latex);
-            foreach (var type in new[] { typeof(GrowthReport), typeof(LaurentReport), typeof(PeriodReport), typeof(ConfinementReport), typeof(ExchangeGraphReport) })
+            foreach (var type in new[] { typeof(GrowthReport), typeof(LaurentReport), typeof(PeriodReport), typeof(ConfinementReport) })
                 Formatter.SetPreferredMimeTypesFor(type, Html);
             _registered = true;
         }

@@ -14,6 +14,7 @@ internal static class CommandLineApp
         new GrowthCommand(),
         new PeriodCommand(),
         new ConfineCommand(),
+        new AnalyzeCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

@@ -18,6 +18,7 @@ internal sealed class GrowthCommand : CliCommand
         new("time-limit", "S", "stop after S seconds (default 60)"),
         new("json", null, "print a JSON object: degrees, class, entropy, generatingFunction, minimalPolynomial, ..."),
         new("latex", null, "print the result as LaTeX"),
+        SvgOutput.Option("the degrees on log-linear axes with the fitted curve"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
@@ -40,6 +41,7 @@ internal sealed class GrowthCommand : CliCommand
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }
+        SvgOutput.Save(args, () => Plots.GrowthPlot.Render(report));
         int exit = LaurentCommand.Print(report, args, context);
         if (exit == 0 && !report.Fit.IsFound)
         {

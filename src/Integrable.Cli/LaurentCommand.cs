@@ -27,6 +27,7 @@ internal sealed class LaurentCommand : CliCommand
         new("time-limit", "S", "stop after S seconds"),
         new("json", null, "print a JSON object: laurent, positive, steps [{n, terms, positive, integer, ...}], firstFailure, witness, ..."),
         new("latex", null, "print the report as LaTeX"),
+        SvgOutput.Option("the number of terms of each iterate (log scale)"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
@@ -73,6 +74,7 @@ internal sealed class LaurentCommand : CliCommand
                 _ => throw new CliUsageException("no equation"),
             };
         }
+        SvgOutput.Save(args, () => Plots.LaurentPlot.Render(report));
         return Print(report, args, context);
     }
 

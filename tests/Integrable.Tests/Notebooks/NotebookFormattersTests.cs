@@ -1,7 +1,10 @@
 using Integrable.Analyses;
 using Integrable.Clusters;
+using Integrable.LinearAlgebra;
+using Integrable.Numbers;
 using Integrable.Notebooks;
 using Integrable.Polynomials;
+using Integrable.RationalFunctions;
 using Integrable.Recursions;
 using Microsoft.DotNet.Interactive.Commands;
 using Microsoft.DotNet.Interactive.CSharp;
@@ -21,6 +24,26 @@ public class NotebookFormattersTests
         var p = LaurentPolynomial.Parse(ring, "x^2 + 3*x/y");
         Assert.Equal("$$" + p.ToLatex() + "$$", p.ToDisplayString(NotebookFormatters.Latex));
         Assert.Contains("integrable-math", p.ToDisplayString(NotebookFormatters.Html));
+    }
+
+    [Fact]
+    public void Register_RationalFunctionAndMatrix_DisplayMathOfTheirLatex()
+    {
+        var f = RationalFunction.Parse(new RationalFunctionField("x", "y"), "(x^2 + 3*x + 1)/(x*y)");
+        Assert.Equal("$$" + f.ToLatex() + "$$", f.ToDisplayString(NotebookFormatters.Latex));
+        var m = RationalMatrix.Create(2, 2, (i, j) => new Rational(i + 1, j + 2));
+        string latex = m.ToDisplayString(NotebookFormatters.Latex);
+        Assert.Equal("$$" + m.ToLatex() + "$$", latex);
+        Assert.StartsWith("$$\\begin{pmatrix}", latex);
+    }
+
+    [Fact]
+    public void Register_Twice_IsHarmless()
+    {
+        NotebookFormatters.Register();
+        Assert.True(NotebookFormatters.IsRegistered);
+        var ring = new LaurentPolynomialRing("x");
+        Assert.Equal("$$x$$", ring.Variable(0).ToDisplayString(NotebookFormatters.Latex));
     }
 
     [Fact]

@@ -40,6 +40,7 @@ internal sealed class GrowthCommand : CliCommand
         }
         catch (SingularStepException e)
         {
+            progress.Dispose();
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }

@@ -42,11 +42,13 @@ internal sealed class PeriodCommand : CliCommand
         }
         catch (SingularStepException e)
         {
+            progress.Dispose();
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }
         catch (BudgetExceededException e)
         {
+            progress.Dispose();
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }

@@ -17,6 +17,7 @@ internal static class CommandLineApp
         new IntegralsCommand(),
         new SeriesCommand(),
         new TauCommand(),
+        new AnalyzeCommand(),
     ];
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CancellationToken cancellation = default)

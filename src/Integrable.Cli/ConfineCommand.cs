@@ -23,12 +23,14 @@ internal sealed class ConfineCommand : CliCommand
         new("set", "name=value,...", "values of parameters (the others get random rational values)"),
         new("start", "n", "index of the first initial value (non-autonomous equations; default 0)"),
         new("time-limit", "S", "stop after S seconds"),
+        new("quiet", null, "no progress line on stderr (it is also off when stderr is not a terminal)"),
         new("json", null, "print a JSON object: confined, singularities [{value, pattern, confined, confinedAt, ...}], ..."),
         new("latex", null, "print the patterns as LaTeX"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
     {
+        using var progress = new ProgressDisplay(context, args.Has("quiet"));
         int steps = args.GetInt("steps", 10, 1, 1000);
         int start = args.GetInt("start", 0, -1_000_000, 1_000_000);
         var input = LaurentCommand.ReadInput(args.Positional(0, "equation (e.g. \"x_{n+1} + x_{n-1} = x_n + 1/x_n^2\")"), allowLattice: false, allowSystem: false);
@@ -41,7 +43,8 @@ internal sealed class ConfineCommand : CliCommand
             ParameterValues = LaurentCommand.ReadParameters(args, input.Parameters),
             Budget = LaurentCommand.ReadBudget(args, 500_000),
         };
-        var report = SingularityConfinement.Test(input.Scalar!, options, cancellation: context.Cancellation);
+        var report = SingularityConfinement.Test(input.Scalar!, options, progress: progress, cancellation: context.Cancellation);
+        progress.Dispose();   // clear the progress line before the report
         return LaurentCommand.Print(report, args, context);
     }
 }

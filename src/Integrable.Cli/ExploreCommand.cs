@@ -18,6 +18,7 @@ internal sealed class ExploreCommand : CliCommand
         new("limit", "N", "stop after N seeds (default 200000)"),
         new("exact", null, "identify cluster variables as exact Laurent polynomials instead of fingerprints"),
         new("json", null, "print {\"seeds\": S, \"variables\": V, \"complete\": true|false, \"depth\": D}"),
+        SvgOutput.Option("the initial quiver as a graph"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
@@ -25,6 +26,7 @@ internal sealed class ExploreCommand : CliCommand
         var matrix = ReadMatrix(args);
         int limit = args.GetInt("limit", 200_000, 1, 50_000_000);
         var options = new ExplorationOptions { MaxSeeds = limit };
+        SvgOutput.Save(args, () => Plots.QuiverPlot.Render(matrix, "Initial quiver"));
         ExchangeGraphReport report;
         try
         {

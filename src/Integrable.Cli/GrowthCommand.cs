@@ -16,12 +16,15 @@ internal sealed class GrowthCommand : CliCommand
         new("set", "name=value,...", "values of parameters (the others get generic random values)"),
         new("max-degree", "D", "stop when a degree exceeds D (default 200000)"),
         new("time-limit", "S", "stop after S seconds (default 60)"),
+        new("quiet", null, "no progress line on stderr (it is also off when stderr is not a terminal)"),
         new("json", null, "print a JSON object: degrees, class, entropy, generatingFunction, minimalPolynomial, ..."),
         new("latex", null, "print the result as LaTeX"),
+        SvgOutput.Option("the degrees on log-linear axes with the fitted curve"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
     {
+        using var progress = new ProgressDisplay(context, args.Has("quiet"));
         int steps = args.GetInt("steps", 20, 1, 100_000);
         int maxDegree = args.GetInt("max-degree", 200_000, 1);
         var input = LaurentCommand.ReadInput(args.Positional(0, "equation (e.g. \"x_{n+1} + x_{n-1} = x_n + 1/x_n^2\")"), allowLattice: false);
@@ -32,14 +35,17 @@ internal sealed class GrowthCommand : CliCommand
         try
         {
             report = input.Scalar is { } r
-                ? DegreeGrowth.Analyse(r, steps, options, cancellation: context.Cancellation)
-                : DegreeGrowth.Analyse(input.System!, steps, options, cancellation: context.Cancellation);
+                ? DegreeGrowth.Analyse(r, steps, options, progress: progress, cancellation: context.Cancellation)
+                : DegreeGrowth.Analyse(input.System!, steps, options, progress: progress, cancellation: context.Cancellation);
         }
         catch (SingularStepException e)
         {
+            progress.Dispose();
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }
+        progress.Dispose();   // clear the progress line before the report
+        SvgOutput.Save(args, () => Plots.GrowthPlot.Render(report));
         int exit = LaurentCommand.Print(report, args, context);
         if (exit == 0 && !report.Fit.IsFound)
         {

@@ -20,6 +20,7 @@ internal sealed class IterateCommand : CliCommand
         new("mod", "P", "compute modulo the prime P (P < 2^62)"),
         new("float", null, "compute in double precision"),
         new("json", null, "print {\"values\": [...]} for scripts"),
+        SvgOutput.Option("the orbit (x_n, x_{n+1}) of a second-order map (exact or --float values)"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
@@ -33,8 +34,11 @@ internal sealed class IterateCommand : CliCommand
                 throw new CliUsageException($"--set: {name} is not a parameter of the equation (parameters: {(recurrence.Parameters.Length == 0 ? "none" : string.Join(", ", recurrence.Parameters))})");
         foreach (var p in recurrence.Parameters)
             if (!assignments.ContainsKey(p)) throw new CliUsageException($"parameter {p} has no value; give it with --set {p}=VALUE");
+        if (args.Has("svg") && (recurrence.Order != 2 || args.Has("mod")))
+            throw new CliUsageException(recurrence.Order != 2 ? $"--svg draws the orbit of a second-order map; this recursion has order {recurrence.Order}" : "--svg needs exact or --float values, not --mod");
         var initialText = args.Require("initial");
         List<string> printed;
+        List<double>? orbit = null;
         try
         {
             if (args.Has("float"))
@@ -42,8 +46,9 @@ internal sealed class IterateCommand : CliCommand
                 var init = ValueLists.ParseDoubles(initialText, "initial");
                 CheckCount(init.Count, recurrence);
                 var pars = recurrence.Parameters.Select(p => assignments[p].ToDouble()).ToList();
-                printed = recurrence.Iterate(DoubleField.Instance, init, steps, pars, cancellation: context.Cancellation)
-                    .Select(v => v.ToString("R", System.Globalization.CultureInfo.InvariantCulture)).ToList();
+                var values = recurrence.Iterate(DoubleField.Instance, init, steps, pars, cancellation: context.Cancellation);
+                orbit = [.. values];
+                printed = values.Select(v => v.ToString("R", System.Globalization.CultureInfo.InvariantCulture)).ToList();
             }
             else if (args.Has("mod"))
             {
@@ -64,8 +69,9 @@ internal sealed class IterateCommand : CliCommand
                 var init = ValueLists.ParseRationals(initialText, "initial");
                 CheckCount(init.Count, recurrence);
                 var pars = recurrence.Parameters.Select(p => assignments[p]).ToList();
-                printed = recurrence.Iterate(RationalField.Instance, init, steps, pars, cancellation: context.Cancellation)
-                    .Select(v => v.ToString()).ToList();
+                var values = recurrence.Iterate(RationalField.Instance, init, steps, pars, cancellation: context.Cancellation);
+                orbit = values.Select(v => v.ToDouble()).ToList();
+                printed = values.Select(v => v.ToString()).ToList();
             }
         }
         catch (SingularStepException e)
@@ -73,6 +79,9 @@ internal sealed class IterateCommand : CliCommand
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }
+        if (orbit is not null)
+            SvgOutput.Save(args, () => Plots.OrbitPlot.Render([orbit.Zip(orbit.Skip(1)).Select(p => (p.First, p.Second)).ToList()],
+                new Plots.OrbitPlotOptions { Title = $"Orbit of {recurrence.Text}" }));
         if (args.Has("json"))
         {
             JsonOutput.Write(context.Out, w =>

@@ -25,12 +25,15 @@ internal sealed class LaurentCommand : CliCommand
         new("mutations", "k1,k2,...", "the mutation directions for --matrix"),
         new("max-terms", "N", "stop when a value has more than N terms (default 200000)"),
         new("time-limit", "S", "stop after S seconds"),
+        new("quiet", null, "no progress line on stderr (it is also off when stderr is not a terminal)"),
         new("json", null, "print a JSON object: laurent, positive, steps [{n, terms, positive, integer, ...}], firstFailure, witness, ..."),
         new("latex", null, "print the report as LaTeX"),
+        SvgOutput.Option("the number of terms of each iterate (log scale)"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
     {
+        using var progress = new ProgressDisplay(context, args.Has("quiet"));
         var budget = ReadBudget(args, 200_000);
         LaurentReport report;
         if (args.Has("matrix"))
@@ -54,7 +57,7 @@ internal sealed class LaurentCommand : CliCommand
             if (dirs.Count == 0) throw new CliUsageException("--mutations: give at least one direction");
             foreach (var k in dirs)
                 if (k > matrix.MutableCount) throw new CliUsageException($"--mutations: direction {k} is out of range 1..{matrix.MutableCount}");
-            report = LaurentPhenomenon.Check(matrix, dirs, new LaurentOptions { Budget = budget }, cancellation: context.Cancellation);
+            report = LaurentPhenomenon.Check(matrix, dirs, new LaurentOptions { Budget = budget }, progress: progress, cancellation: context.Cancellation);
         }
         else
         {
@@ -65,14 +68,16 @@ internal sealed class LaurentCommand : CliCommand
             var options = new LaurentOptions { ParameterValues = values, Budget = budget };
             report = input switch
             {
-                { Scalar: { } r } => LaurentPhenomenon.Check(r, steps, options, cancellation: context.Cancellation),
-                { System: { } s } => LaurentPhenomenon.Check(s, steps, options, cancellation: context.Cancellation),
+                { Scalar: { } r } => LaurentPhenomenon.Check(r, steps, options, progress: progress, cancellation: context.Cancellation),
+                { System: { } s } => LaurentPhenomenon.Check(s, steps, options, progress: progress, cancellation: context.Cancellation),
                 { Lattice: { } l } => steps < l.Order
                     ? throw new CliUsageException($"--steps: the lattice recurrence has order {l.Order} in time, so the last time index must be at least {l.Order}")
-                    : LaurentPhenomenon.Check(l, steps, options: options, cancellation: context.Cancellation),
+                    : LaurentPhenomenon.Check(l, steps, options: options, progress: progress, cancellation: context.Cancellation),
                 _ => throw new CliUsageException("no equation"),
             };
         }
+        progress.Dispose();   // clear the progress line before the report
+        SvgOutput.Save(args, () => Plots.LaurentPlot.Render(report));
         return Print(report, args, context);
     }
 

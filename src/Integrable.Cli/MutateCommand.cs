@@ -24,6 +24,7 @@ internal sealed class MutateCommand : CliCommand
         new("sequence", "K1,K2,...", "mutation directions 1..n, applied first to last (empty: no mutation)"),
         new("initial", "V1,V2,...", "values of x_1, ..., x_n, y_1, ..., y_m for the \"values\" field"),
         new("json", null, "print {\"variables\": [...], \"matrix\": [[...]], \"values\": [...]}"),
+        SvgOutput.Option("the mutated quiver (valued quiver for a skew-symmetrizable matrix) as a graph"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
@@ -60,6 +61,7 @@ internal sealed class MutateCommand : CliCommand
         var variables = seed.Cluster.Select(v => v.ToString()).ToList();
         var values = valued?.Cluster.Select(v => v.ToString()).ToList();
         var result = seed.Matrix;
+        SvgOutput.Save(args, () => Plots.QuiverPlot.Render(result, directions.Count == 0 ? "Quiver" : $"Quiver after mutations {string.Join(", ", directions)}"));
         if (args.Has("json"))
         {
             JsonOutput.Write(context.Out, w =>

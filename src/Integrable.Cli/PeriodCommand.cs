@@ -16,12 +16,14 @@ internal sealed class PeriodCommand : CliCommand
         new("set", "name=value,...", "values of parameters (the others stay symbolic)"),
         new("points", "R", "random points modulo primes (default 3)"),
         new("time-limit", "S", "stop after S seconds"),
+        new("quiet", null, "no progress line on stderr (it is also off when stderr is not a terminal)"),
         new("json", null, "print a JSON object: period (number or null), maxPeriod, method, errorBound, ..."),
         new("latex", null, "print the result as LaTeX"),
     ];
 
     public override int Execute(ParsedArguments args, CliContext context)
     {
+        using var progress = new ProgressDisplay(context, args.Has("quiet"));
         int max = args.GetInt("max", 30, 1, 100_000);
         int points = args.GetInt("points", 3, 1, 100);
         var input = LaurentCommand.ReadInput(args.Positional(0, "equation (e.g. \"x_{n+1} x_{n-1} = x_n + 1\")"), allowLattice: false);
@@ -35,19 +37,22 @@ internal sealed class PeriodCommand : CliCommand
         try
         {
             report = input.Scalar is { } r
-                ? Periodicity.Find(r, max, options, cancellation: context.Cancellation)
-                : Periodicity.Find(input.System!, max, options, cancellation: context.Cancellation);
+                ? Periodicity.Find(r, max, options, progress: progress, cancellation: context.Cancellation)
+                : Periodicity.Find(input.System!, max, options, progress: progress, cancellation: context.Cancellation);
         }
         catch (SingularStepException e)
         {
+            progress.Dispose();
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }
         catch (BudgetExceededException e)
         {
+            progress.Dispose();
             context.Error.WriteLine($"integrable: {e.Message}");
             return 1;
         }
+        progress.Dispose();   // clear the progress line before the report
         return LaurentCommand.Print(report, args, context);
     }
 }

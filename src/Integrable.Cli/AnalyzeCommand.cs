@@ -1,28 +1,30 @@
 using System.Text;
 using Integrable.Analyses;
+using Integrable.Integrals;
 using Integrable.Recursions;
 
 namespace Integrable.Cli;
 
 /// <summary><c>integrable analyze "&lt;equation&gt;" [--json]</c>: runs the battery of analyses on one
-/// equation (Laurent property, degree growth, period, singularity confinement) and prints one report:
+/// equation (Laurent property, degree growth, period, singularity confinement, first integrals) and prints one report:
 /// a summary and each analysis's report as text, or with <c>--json</c> one object holding one member
 /// per analysis (the report's own JSON, or <c>{"error": …}</c> when that analysis could not run).</summary>
 internal sealed class AnalyzeCommand : CliCommand
 {
     public override string Name => "analyze";
-    public override string Summary => "run the whole battery (Laurent, growth, period, confinement) on one equation and print one report";
-    public override string Usage => "\"<equation>\" [--steps N] [--growth-steps N] [--max-period P] [--set name=value,...] [--time-limit S] [--quiet] [--json]";
+    public override string Summary => "run the whole battery (Laurent, growth, period, confinement, first integrals) on one equation and print one report";
+    public override string Usage => "\"<equation>\" [--steps N] [--growth-steps N] [--max-period P] [--degree D] [--set name=value,...] [--time-limit S] [--quiet] [--json]";
     public override string Example => "integrable analyze \"x_{n+1} x_{n-1} = x_n^2 + 3*x_n + 1\" --json";
     public override IReadOnlyList<CliOption> Options { get; } =
     [
         new("steps", "N", "iterates for the Laurent check (default 8)"),
         new("growth-steps", "N", "terms for the degree growth (default 20)"),
         new("max-period", "P", "largest period searched (default 30)"),
+        new("degree", "D", "total degree of the first integrals searched, polynomial and rational (default 4)"),
         new("set", "name=value,...", "values of parameters (the others stay symbolic or get random values)"),
         new("time-limit", "S", "time limit of each analysis in seconds (default 60)"),
         new("quiet", null, "no progress display on stderr (it is also off when stderr is not a terminal)"),
-        new("json", null, "print one JSON object: subject, then laurent, growth, period, confinement (each the analysis's report object)"),
+        new("json", null, "print one JSON object: subject, then laurent, growth, period, confinement, integrals (each the analysis's report object)"),
     ];
 
     /// <summary>One analysis of the battery: its JSON member name and how to run it.</summary>
@@ -55,8 +57,24 @@ internal sealed class AnalyzeCommand : CliCommand
         };
         if (scalar is not null)
             battery.Add(new("confinement", p => SingularityConfinement.Test(scalar, new ConfinementOptions { ParameterValues = parameters, Budget = budget }, p, ct)));
-        // INTEGRALS: the first-integrals analysis joins the battery here, as one more entry
-        // new("integrals", p => …) with its default degree, once its report type exists.
+        int integralDegree = args.GetInt("degree", 4, 1, 40);
+        var integralOptions = IntegralOptions.Default with { Degree = integralDegree, Rational = true, Budget = budget };
+        battery.Add(new("integrals", p =>
+        {
+            IntegralMap map;
+            if (scalar is not null)
+            {
+                if (!scalar.IsAutonomous) throw new ArgumentException("first integrals are searched for autonomous equations only");
+                var values = parameters.ToDictionary(kv => kv.Key, kv => kv.Value.ToString(), StringComparer.Ordinal);
+                map = values.Count == 0 ? IntegralMap.FromRecurrence(scalar) : IntegralMap.FromRecurrence(scalar, [values]);
+            }
+            else
+            {
+                if (parameters.Count > 0) throw new ArgumentException("--set applies to scalar equations only for first integrals");
+                map = IntegralMap.FromSystem(system!);
+            }
+            return FirstIntegrals.Find(map, integralOptions, p, ct);
+        }));
 
         var results = new List<(string Name, IAnalysisReport? Report, string? Error)>();
         using (var progress = new ProgressDisplay(context, args.Has("quiet")))
@@ -129,6 +147,11 @@ internal sealed class AnalyzeCommand : CliCommand
                 break;
             case PeriodReport p:
                 sb.Append(p.Period is { } period ? $"period {period}" : $"no period up to {p.MaxPeriod}");
+                break;
+            case IntegralsReport i:
+                sb.Append(i.Integrals.Length == 0
+                    ? $"no first integral up to degree {i.Degree}"
+                    : $"{i.Integrals.Length} first integral{(i.Integrals.Length == 1 ? "" : "s")} up to degree {i.Degree}, {i.Independent} independent (of {i.Expected} for complete integrability)");
                 break;
             case ConfinementReport c:
                 sb.Append(c.Singularities.Length == 0 ? "no singularity found to test"

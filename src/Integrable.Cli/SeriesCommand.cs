@@ -53,13 +53,13 @@ internal sealed class SeriesCommand : CliCommand
                     throw new CliUsageException($"--boundary: an equation of order {rec.Order} needs {rec.Order - 1} boundary value(s), got {conditions.Count}");
                 for (int i = 1; i < conditions.Count; i++)
                     if (conditions[i].Index != conditions[0].Index + i) throw new CliUsageException("--boundary: the values must be at consecutive indices");
-                solution = SeriesSolver.SolveBoundaryValue(rec, parameter, conditions[0].Index, conditions.Select(c => c.Value).ToList(), options, context.Cancellation);
+                solution = SeriesSolver.SolveBoundaryValue(rec, parameter, conditions[0].Index, conditions.Select(c => c.Value).ToList(), options, cancellation: context.Cancellation);
             }
             else
             {
                 var initial = ValueLists.ParseRationals(args.Require("initial"), "initial");
                 if (initial.Count != rec.Order) throw new CliUsageException($"--initial: an equation of order {rec.Order} needs {rec.Order} values, got {initial.Count}");
-                solution = SeriesSolver.SolveInitialValue(rec, parameter, initial, 0, options, context.Cancellation);
+                solution = SeriesSolver.SolveInitialValue(rec, parameter, initial, 0, options, cancellation: context.Cancellation);
             }
         }
         catch (ArgumentException e)

@@ -46,8 +46,9 @@ public static class SeriesSolver
     /// <exception cref="ArgumentException">Bad parameter name, missing parameter values or wrong number of initial values.</exception>
     /// <exception cref="SeriesConvergenceException">A step divides by a series vanishing at g = 0.</exception>
     public static SeriesSolution SolveInitialValue(Recurrence recurrence, string parameter, IReadOnlyList<Rational> initial,
-        long start = 0, SeriesOptions? options = null, CancellationToken cancellation = default, IProgress<AnalysisProgress>? progress = null)
+        long start = 0, SeriesOptions? options = null, IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         ArgumentNullException.ThrowIfNull(initial);
         options ??= new SeriesOptions();
@@ -168,9 +169,10 @@ public static class SeriesSolver
     /// tail never reaches the limit within <see cref="SeriesOptions.MaxWindow"/>; the message says why.</exception>
     /// <exception cref="BudgetExceededException">The time limit was reached.</exception>
     public static SeriesSolution SolveBoundaryValue(Recurrence recurrence, string parameter, long boundaryIndex,
-        IReadOnlyList<Rational> boundaryValues, SeriesOptions? options = null, CancellationToken cancellation = default,
-        IProgress<AnalysisProgress>? progress = null)
+        IReadOnlyList<Rational> boundaryValues, SeriesOptions? options = null, IProgress<AnalysisProgress>? progress = null,
+        CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         ArgumentNullException.ThrowIfNull(boundaryValues);
         options ??= new SeriesOptions();

@@ -46,15 +46,16 @@ public static class TauFitter
     /// <exception cref="ArgumentException">Not of order 2, bad parameter.</exception>
     /// <exception cref="SeriesConvergenceException">The series solution itself cannot be computed.</exception>
     public static TauReport FitBoundary(Recurrence recurrence, string parameter, long boundaryIndex, Rational boundaryValue,
-        SeriesOptions? options = null, IReadOnlyList<TauAnsatz>? family = null, CancellationToken cancellation = default,
-        IProgress<AnalysisProgress>? progress = null)
+        SeriesOptions? options = null, IReadOnlyList<TauAnsatz>? family = null, IProgress<AnalysisProgress>? progress = null,
+        CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         if (recurrence.Order != 2) throw new ArgumentException($"the boundary fitter handles recursions of order 2, this one has order {recurrence.Order}", nameof(recurrence));
         options ??= new SeriesOptions();
         options = options with { Count = Math.Max(options.Count, 10) };
-        var sol = SeriesSolver.SolveBoundaryValue(recurrence, parameter, boundaryIndex, [boundaryValue], options, cancellation);
-        return FitSeries(sol, boundaryValue, options.ParameterValues, family, cancellation, progress);
+        var sol = SeriesSolver.SolveBoundaryValue(recurrence, parameter, boundaryIndex, [boundaryValue], options, cancellation: cancellation);
+        return FitSeries(sol, boundaryValue, options.ParameterValues, family, progress, cancellation);
     }
 
     /// <summary>Fits a tau function to an already computed boundary-value series solution (the series-data route of
@@ -68,8 +69,9 @@ public static class TauFitter
     /// <returns>The report.</returns>
     /// <exception cref="ArgumentException">Not a boundary-value solution of an order-2 recursion.</exception>
     public static TauReport FitSeries(SeriesSolution solution, Rational boundaryValue, IReadOnlyDictionary<string, Rational>? parameterValues = null,
-        IReadOnlyList<TauAnsatz>? family = null, CancellationToken cancellation = default, IProgress<AnalysisProgress>? progress = null)
+        IReadOnlyList<TauAnsatz>? family = null, IProgress<AnalysisProgress>? progress = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(solution);
         if (solution.Kind != SeriesProblemKind.BoundaryValue || solution.LimitValue is null || solution.Recurrence.Order != 2)
             throw new ArgumentException("give a boundary-value series solution of an order-2 recursion", nameof(solution));
@@ -330,6 +332,7 @@ public static class TauFitter
     public static TauReport FitInitial(Recurrence recurrence, IReadOnlyList<Rational> initial, int terms = 40,
         IReadOnlyDictionary<string, Rational>? parameterValues = null, CancellationToken cancellation = default)
     {
+        using var cancellationScope = Kernels.KernelCancellation.Enter(cancellation);
         ArgumentNullException.ThrowIfNull(recurrence);
         ArgumentNullException.ThrowIfNull(initial);
         ArgumentOutOfRangeException.ThrowIfLessThan(terms, 8);

@@ -76,23 +76,4 @@ public class ReportJsonTests
         Assert.Equal(5, j.Period);
         Assert.Equal((r.Period, r.MaxPeriod, r.Points, r.IsAutonomous, r.Verification), (j.Period, j.MaxPeriod, j.Points, j.Autonomous, j.Verification));
     }
-
-    [Fact]
-    public async Task Analyses_RunConcurrentlyOnSharedObjects_SameReportsAsSequential()
-    {
-        var rule = Recurrence.Parse(Tour);
-        var lyness = Recurrence.Parse("x_{n+1} x_{n-1} = x_n + 1");
-        Func<string>[] jobs =
-        [
-            // the exact confirmation of the first degrees has a 0.3 s time budget, so its count depends on
-            // the machine's load; it is switched off to compare like with like
-            () => DegreeGrowth.Analyse(rule, 12, new GrowthOptions { ExactConfirmation = false }).ToJson(),
-            () => LaurentPhenomenon.Check(rule, 5).ToJson(),
-            () => Periodicity.Find(lyness, 8).ToJson(),
-            () => SingularityConfinement.Test(rule).ToJson(),
-        ];
-        var sequential = jobs.Select(j => j()).ToArray();
-        var concurrent = await Task.WhenAll(Enumerable.Range(0, 3).SelectMany(_ => jobs).Select(j => Task.Run(j)));
-        for (int i = 0; i < concurrent.Length; i++) Assert.Equal(sequential[i % jobs.Length], concurrent[i]);
-    }
 }

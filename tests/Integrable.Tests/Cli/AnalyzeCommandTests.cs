@@ -17,10 +17,24 @@ public class AnalyzeCommandTests
         Assert.Equal("", stderr);   // no progress display when stderr is not the terminal
         var root = JsonDocument.Parse(stdout).RootElement;
         Assert.Equal(Lyness, root.GetProperty("subject").GetString());
-        Assert.Equal(["subject", "laurent", "growth", "period", "confinement"], root.EnumerateObject().Select(p => p.Name));
+        Assert.Equal(["subject", "laurent", "growth", "period", "confinement", "integrals"], root.EnumerateObject().Select(p => p.Name));
         Assert.True(root.GetProperty("laurent").GetProperty("laurent").GetBoolean());
         Assert.Equal("bounded", root.GetProperty("growth").GetProperty("class").GetString());
         Assert.Equal(5, root.GetProperty("period").GetProperty("period").GetInt32());
+        // Its rational integral (x+1)(y+1)(x+y+1)/(xy) (Lyness 1942; Kocic–Ladas 1993) is found and proven.
+        var integrals = root.GetProperty("integrals");
+        Assert.True(integrals.GetProperty("verified").GetBoolean());
+        Assert.Equal(1, integrals.GetProperty("independent").GetInt32());
+        Assert.NotEmpty(integrals.GetProperty("integrals").EnumerateArray());
+    }
+
+    [Fact]
+    public void Text_HietarintaViallet_NoIntegralSummary()
+    {
+        // Hietarinta–Viallet 1998: confined but non-integrable, no polynomial integral.
+        var (_, stdout, _) = Run("analyze", "x_{n+1} + x_{n-1} = x_n + 1/x_n^2", "--quiet", "--growth-steps", "10");
+        Assert.Contains("  integrals    no first integral up to degree 4", stdout);
+        Assert.Contains("== integrals ==", stdout);
     }
 
     [Fact]

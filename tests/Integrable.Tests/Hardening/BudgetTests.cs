@@ -78,4 +78,24 @@ public class BudgetTests
         Assert.False(r.Complete);
         Assert.InRange(r.SeedCount, 1, 500);
     }
+
+    [Fact]
+    public void Integrals_TimeLimit_PartialReportNamesTime()
+    {
+        var r = Integrable.Integrals.FirstIntegrals.Find(Somos5,
+            new Integrable.Integrals.IntegralOptions { Degree = 12, Budget = Only(b => b with { TimeLimit = Short }) });
+        Assert.Equal(BudgetLimit.Time, r.Limit);
+        Assert.False(r.IsComplete);
+    }
+
+    [Fact]
+    public void Series_TimeLimit_TypedExceptionWithPrecisionReached()
+    {
+        var clock = System.Diagnostics.Stopwatch.StartNew();
+        var e = Assert.Throws<BudgetExceededException>(() => Integrable.Solutions.SeriesSolver.SolveBoundaryValue(
+            Recurrence.Parse("R_n = 1 + g R_n (R_{n-1} + R_n + R_{n+1})"), "g", 0, [Integrable.Numbers.Rational.Zero],
+            new Integrable.Solutions.SeriesOptions { Order = 800, Budget = Only(b => b with { TimeLimit = Short }) }));
+        Assert.Equal(BudgetLimit.Time, e.Limit);
+        Assert.True(clock.Elapsed < Short + TimeSpan.FromSeconds(3), $"took {clock.Elapsed}");
+    }
 }

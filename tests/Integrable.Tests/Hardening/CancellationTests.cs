@@ -27,6 +27,14 @@ public class CancellationTests
         // The Markov quiver has infinitely many seeds.
         ["explore"] = c => ExchangeGraph.Explore(ExchangeMatrix.Parse("[[0,2,-2],[-2,0,2],[2,-2,0]]"),
             new ExplorationOptions { MaxSeeds = int.MaxValue }, cancellation: c),
+        // Series solution of a boundary-value problem to order 800: minutes of exact Newton steps.
+        ["series"] = c => Integrable.Solutions.SeriesSolver.SolveBoundaryValue(
+            Recurrence.Parse("R_n = 1 + g R_n (R_{n-1} + R_n + R_{n+1})"), "g", 0, [Integrable.Numbers.Rational.Zero],
+            new Integrable.Solutions.SeriesOptions { Order = 800 }, cancellation: c),
+        // First integrals of degree 12 of a fifth-order map: a large modular linear system.
+        ["integrals"] = c => Integrable.Integrals.FirstIntegrals.Find(
+            Recurrence.Parse("x_{n+5} x_n = x_{n+4} x_{n+1} + x_{n+3} x_{n+2}"),
+            new Integrable.Integrals.IntegralOptions { Degree = 12, Budget = AnalysisBudget.Unlimited }, cancellation: c),
         // Somos-4 in the Laurent ring: a single late step is one very large product and division.
         ["iterate-laurent"] = c =>
         {

@@ -40,7 +40,7 @@ public class CliBadInputTests
     public static TheoryData<string[]> Cases()
     {
         var data = new TheoryData<string[]>();
-        foreach (var command in new[] { "laurent", "growth", "period", "confine" })
+        foreach (var command in new[] { "laurent", "growth", "period", "confine", "integrals", "series", "tau", "analyze" })
             foreach (var tail in EquationTail)
             {
                 // "--steps" means the number of steps for every command but period (which has --max).
@@ -82,6 +82,15 @@ public class CliBadInputTests
             ["confine", Lyness, "--value", "1,abc"],
             ["confine", Lyness, "--start", "x"],
             ["period", Lyness, "--points", "0"],
+            ["integrals", Lyness, "--degree", "0"],
+            ["integrals", Lyness, "--periodic", "a=1"],
+            ["integrals", "x_{n+1} x_{n-1} = x_n + n"],                     // non-autonomous
+            ["series", "R_n = 1 + g R_n (R_{n-1} + R_{n+1})", "--parameter", "h", "--order", "5"],
+            ["series", "R_n = 1 + g R_n (R_{n-1} + R_{n+1})", "--parameter", "g", "--order", "-5"],
+            ["series", "R_n = 1 + g R_n (R_{n-1} + R_{n+1})", "--parameter", "g", "--boundary", "R_0"],
+            ["tau", "R_n = 1 + g R_n (R_{n-1} + R_{n+1})", "--parameter", "g", "--boundary", "R_0=0", "--initial", "1,2"],
+            ["tau", Lyness, "--initial", "1,x"],
+            ["analyze", Lyness, "--degree", "0"],
             ["demo", "--steps", "0"],
             ["nosuchcommand"],
             ["--nosuchflag"],

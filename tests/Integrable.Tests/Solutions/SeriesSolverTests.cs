@@ -150,7 +150,7 @@ public class SeriesSolverTests
         using var cts = new CancellationTokenSource();
         cts.Cancel();
         Assert.ThrowsAny<OperationCanceledException>(() => SeriesSolver.SolveBoundaryValue(Recurrence.Parse(Quadrangulations), "g", 0,
-            [Rational.Zero], new SeriesOptions { Order = 10 }, cts.Token));
+            [Rational.Zero], new SeriesOptions { Order = 10 }, cancellation: cts.Token));
     }
 
     [Fact]

@@ -174,62 +174,68 @@ internal struct Wide448Ops : ICoefficientOps<Magnitude192, Int448>
         a.W6--;
     }
 
-    /// <summary>The general product: schoolbook over the operands' limbs into six limbs, then one
-    /// add or subtract with carry over all seven.</summary>
-    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
+    /// <summary>hi:lo = x·y + t + c (never overflows 128 bits).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static ulong MulAddLimb(ulong x, ulong y, ulong t, ulong c, out ulong lo)
+    {
+        ulong hi = Math.BigMul(x, y, out ulong l);
+        l += t;
+        hi += l < t ? 1UL : 0UL;
+        l += c;
+        hi += l < c ? 1UL : 0UL;
+        lo = l;
+        return hi;
+    }
+
+    /// <summary>The general product: schoolbook over two or three limbs per operand into six limbs, then one
+    /// add or subtract with carry over all seven, written out so that every limb stays in a register.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void AccumulateWide(ref Int448 acc, in Magnitude192 a, in Magnitude192 b, bool subtract)
     {
-        Span<ulong> x = [a.L0, a.L1, a.L2];
-        Span<ulong> y = [b.L0, b.L1, b.L2];
-        int nx = a.L2 != 0 ? 3 : a.L1 != 0 ? 2 : 1;
-        int ny = b.L2 != 0 ? 3 : b.L1 != 0 ? 2 : 1;
-        Span<ulong> p = stackalloc ulong[6];
-        p.Clear();
-        for (int i = 0; i < nx; i++)
+        ulong p0, p1, p2, p3, p4 = 0, p5 = 0;
+        if ((a.L2 | b.L2) == 0)
         {
-            ulong carry = 0, xi = x[i];
-            for (int j = 0; j < ny; j++)
-            {
-                ulong hi = Math.BigMul(xi, y[j], out ulong lo);
-                ulong s = p[i + j] + lo;
-                hi += s < lo ? 1UL : 0UL;
-                ulong s2 = s + carry;
-                hi += s2 < s ? 1UL : 0UL;
-                p[i + j] = s2;
-                carry = hi;
-            }
-            p[i + ny] = carry;
-        }
-        Span<ulong> w = [acc.W0, acc.W1, acc.W2, acc.W3, acc.W4, acc.W5, acc.W6];
-        if (!subtract)
-        {
-            ulong c = 0;
-            for (int k = 0; k < 6; k++)
-            {
-                ulong s = w[k] + p[k];
-                ulong c1 = s < p[k] ? 1UL : 0UL;
-                ulong s2 = s + c;
-                c1 |= s2 < s ? 1UL : 0UL;
-                w[k] = s2;
-                c = c1;
-            }
-            w[6] += c;
+            // 2×2 limbs.
+            ulong c = MulAddLimb(a.L0, b.L0, 0, 0, out p0);
+            p2 = MulAddLimb(a.L0, b.L1, 0, c, out p1);
+            c = MulAddLimb(a.L1, b.L0, p1, 0, out p1);
+            p3 = MulAddLimb(a.L1, b.L1, p2, c, out p2);
         }
         else
         {
-            ulong bw = 0;
-            for (int k = 0; k < 6; k++)
-            {
-                ulong d = w[k] - p[k];
-                ulong b1 = w[k] < p[k] ? 1UL : 0UL;
-                ulong d2 = d - bw;
-                b1 |= d < bw ? 1UL : 0UL;
-                w[k] = d2;
-                bw = b1;
-            }
-            w[6] -= bw;
+            // 3×3 limbs, row by row.
+            ulong c = MulAddLimb(a.L0, b.L0, 0, 0, out p0);
+            c = MulAddLimb(a.L0, b.L1, 0, c, out p1);
+            p3 = MulAddLimb(a.L0, b.L2, 0, c, out p2);
+            c = MulAddLimb(a.L1, b.L0, p1, 0, out p1);
+            c = MulAddLimb(a.L1, b.L1, p2, c, out p2);
+            p4 = MulAddLimb(a.L1, b.L2, p3, c, out p3);
+            c = MulAddLimb(a.L2, b.L0, p2, 0, out p2);
+            c = MulAddLimb(a.L2, b.L1, p3, c, out p3);
+            p5 = MulAddLimb(a.L2, b.L2, p4, c, out p4);
         }
-        acc.W0 = w[0]; acc.W1 = w[1]; acc.W2 = w[2]; acc.W3 = w[3]; acc.W4 = w[4]; acc.W5 = w[5]; acc.W6 = w[6];
+        if (!subtract)
+        {
+            ulong s, k;
+            s = acc.W0 + p0; k = s < p0 ? 1UL : 0UL; acc.W0 = s;
+            s = acc.W1 + p1; ulong k1 = s < p1 ? 1UL : 0UL; s += k; k1 |= s < k ? 1UL : 0UL; acc.W1 = s; k = k1;
+            s = acc.W2 + p2; k1 = s < p2 ? 1UL : 0UL; s += k; k1 |= s < k ? 1UL : 0UL; acc.W2 = s; k = k1;
+            s = acc.W3 + p3; k1 = s < p3 ? 1UL : 0UL; s += k; k1 |= s < k ? 1UL : 0UL; acc.W3 = s; k = k1;
+            s = acc.W4 + p4; k1 = s < p4 ? 1UL : 0UL; s += k; k1 |= s < k ? 1UL : 0UL; acc.W4 = s; k = k1;
+            s = acc.W5 + p5; k1 = s < p5 ? 1UL : 0UL; s += k; k1 |= s < k ? 1UL : 0UL; acc.W5 = s; k = k1;
+            acc.W6 += k;
+        }
+        else
+        {
+            ulong d, w, k, k1;
+            w = acc.W0; d = w - p0; k = w < p0 ? 1UL : 0UL; acc.W0 = d;
+            w = acc.W1; d = w - p1; k1 = w < p1 ? 1UL : 0UL; k1 |= d < k ? 1UL : 0UL; acc.W1 = d - k; k = k1;
+            w = acc.W2; d = w - p2; k1 = w < p2 ? 1UL : 0UL; k1 |= d < k ? 1UL : 0UL; acc.W2 = d - k; k = k1;
+            w = acc.W3; d = w - p3; k1 = w < p3 ? 1UL : 0UL; k1 |= d < k ? 1UL : 0UL; acc.W3 = d - k; k = k1;
+            w = acc.W4; d = w - p4; k1 = w < p4 ? 1UL : 0UL; k1 |= d < k ? 1UL : 0UL; acc.W4 = d - k; k = k1;
+            w = acc.W5; d = w - p5; k1 = w < p5 ? 1UL : 0UL; k1 |= d < k ? 1UL : 0UL; acc.W5 = d - k; k = k1;
+            acc.W6 -= k;
+        }
     }
 
     public static void MulAddRow(ref Int448 dest, Magnitude192 a, ref Magnitude192 b, ref nint off, int count)

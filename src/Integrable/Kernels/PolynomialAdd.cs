@@ -12,8 +12,20 @@ internal static class PolynomialAdd
         int n, bool subtract, out Rational[] coeffs, out int[] exps)
     {
         int na = ca.Length, nb = cb.Length;
-        var oc = new Rational[na + nb];
-        var oe = new int[(na + nb) * n];
+        // First pass: count the common exponents, so that the output is allocated at its final size
+        // (unless coefficients cancel). Touching fresh memory is the dominant cost for sums of millions of
+        // terms, so an over-allocation followed by a shrinking copy would double it.
+        int common = 0;
+        for (int p = 0, q = 0; p < na && q < nb;)
+        {
+            int c = Compare(ea.Slice(p * n, n), eb.Slice(q * n, n));
+            if (c > 0) p++;
+            else if (c < 0) q++;
+            else { common++; p++; q++; }
+        }
+        int size = na + nb - common;
+        var oc = new Rational[size];
+        var oe = new int[size * n];
         int i = 0, j = 0, k = 0;
         while (i < na && j < nb)
         {
@@ -54,7 +66,7 @@ internal static class PolynomialAdd
             oc[k] = subtract ? -cb[j] : cb[j];
             eb.Slice(j * n, n).CopyTo(oe.AsSpan(k * n, n));
         }
-        if (k < na + nb)
+        if (k < size)
         {
             Array.Resize(ref oc, k);
             Array.Resize(ref oe, k * n);
@@ -64,9 +76,12 @@ internal static class PolynomialAdd
     }
 
     /// <summary>Lexicographic comparison of exponent vectors, first entry most significant.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static int Compare(ReadOnlySpan<int> a, ReadOnlySpan<int> b)
     {
-        for (int v = 0; v < a.Length; v++)
+        // The first differing entry decides (lex order); CommonPrefixLength is vectorised.
+        int v = a.Length <= 4 ? 0 : a.CommonPrefixLength(b);
+        for (; v < a.Length; v++)
             if (a[v] != b[v]) return a[v] > b[v] ? 1 : -1;
         return 0;
     }

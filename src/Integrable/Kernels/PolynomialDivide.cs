@@ -322,7 +322,7 @@ internal static partial class PolynomialDivide
     /// integers when the coefficients do not fit words.</remarks>
     /// <returns>True with the quotient when B divides A; false otherwise.</returns>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static bool TryDivide(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
+    public static bool TryDivide(ReadOnlySpan<Rational> ca, int[] ea, ReadOnlySpan<Rational> cb, int[] eb,
         int n, out Rational[] coeffs, out int[] exps)
     {
         coeffs = [];
@@ -449,10 +449,11 @@ internal static partial class PolynomialDivide
         private long _window;
         private bool _dense;
 
-        public DivisionInput(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb, int n,
+        public DivisionInput(ReadOnlySpan<Rational> ca, int[] ea, ReadOnlySpan<Rational> cb, int[] eb, int n,
             int[] minA, int[] minB, long[] qRange, long[] offset, long[] radix, long box)
         {
-            _ea = ea.ToArray(); _eb = eb.ToArray(); _n = n; _minA = minA; _minB = minB;
+            // Shared, not copied: the exponent arrays of canonical polynomials are immutable.
+            _ea = ea; _eb = eb; _n = n; _minA = minA; _minB = minB;
             _qRange = qRange; _offset = offset; _radix = radix; _box = box;
             _dense = ForceDense ?? (box <= PolynomialMultiply.DenseMaxBox && box <= DenseBoxPerTerm * ca.Length && cb.Length >= 2);
             if (_dense)

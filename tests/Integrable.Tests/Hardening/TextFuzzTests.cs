@@ -54,7 +54,7 @@ public class TextFuzzTests(ITestOutputHelper output)
     [Fact]
     public void Parse_RandomCharacterStrings_ParseOrFailWithPosition()
     {
-        Gen.Char[Alphabet].Array[0, 40].Select(cs => new string(cs)).Sample(CheckAll, iter: FuzzSettings.Iterations(25_000));
+        Gen.Char[Alphabet].Array[0, 40].Select(cs => new string(cs)).Sample(CheckAll, iter: FuzzSettings.Iterations(27_000));
         Report();
     }
 

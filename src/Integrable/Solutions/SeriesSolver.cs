@@ -207,6 +207,7 @@ public static class SeriesSolver
                 var lp = limit.Truncate(prec);
                 for (int r = 0; r < window; r++)
                 {
+                    Kernels.KernelCancellation.Poll();
                     var e = residual.Evaluate(arith, boundaryIndex + r, i => Term(i, s, window, x, boundaryValues, boundaryIndex, lp, ring), pars).Truncate(prec);
                     if (!e.IsZero) throw new InvalidOperationException($"internal error: window equation {r} has residual {e}");
                 }
@@ -254,6 +255,7 @@ public static class SeriesSolver
         var lim1 = limit.Truncate(1);
         for (int r = 0; r < window; r++)
         {
+            Kernels.KernelCancellation.Poll();
             var e = residual.Evaluate(arith1, b + r, i => Term(i, s, window, x, boundary, b, lim1, ring), pars).Truncate(1);
             if (!e.IsZero)
                 throw new SeriesConvergenceException($"at {ring.Variable} = 0 the equation at {residual.Recurrence.TermName(b + r - residual.LowestShift)} is not solved by the limit's constant term {start.ConstantTerm}: the boundary value is felt at order 0, so the window iteration has no start", 0);
@@ -271,6 +273,7 @@ public static class SeriesSolver
             for (int i = 0; i < window; i++) x[i] = x[i].WithPrecision(m2);
             for (int r = 0; r < window; r++)
             {
+                Kernels.KernelCancellation.Poll();
                 var e = residual.Evaluate(arith, b + r, i => Term(i, s, window, x, boundary, b, lim, ring), pars).Truncate(m2);
                 if (e.Valuation < m)
                     throw new SeriesConvergenceException($"Newton step {steps + 1} lost track: the window equation at {residual.Recurrence.TermName(b + r - residual.LowestShift)} has residual of valuation {e.Valuation} < {m}", m);
@@ -282,6 +285,7 @@ public static class SeriesSolver
                 for (int i = 0; i < window; i++) pert[i] = i % (k + 1) == color ? x[i] + bump : x[i];
                 for (int r = 0; r < window; r++)
                 {
+                    Kernels.KernelCancellation.Poll();
                     // columns of row r: r − p … r + 1
                     int col = -1;
                     for (int c = Math.Max(0, r - p); c <= Math.Min(window - 1, r + 1); c++)
@@ -308,6 +312,7 @@ public static class SeriesSolver
         var inv = new PowerSeries<Rational>[n];
         for (int c = 0; c < n; c++)
         {
+            Kernels.KernelCancellation.Poll();
             var piv = jac[c, p] ?? ring.Zero.WithPrecision(t);
             if (piv.Get(0).IsZero)
                 throw new SeriesConvergenceException($"the linearised window system is singular at {ring.Variable} = 0 in column {c} (pivot vanishes): the equations do not determine {residual.Recurrence.Unknown} order by order in this arrangement (the g = 0 Jacobian needs non-zero leading minors)", m);
@@ -329,6 +334,7 @@ public static class SeriesSolver
         var d = new PowerSeries<Rational>[n];
         for (int c = n - 1; c >= 0; c--)
         {
+            Kernels.KernelCancellation.Poll();
             var v = rhs[c];
             if (c + 1 < n && jac[c, p + 1] is { } up) v = (v - PowerSeries<Rational>.MultiplyCore(up, d[c + 1], t)).Truncate(t);
             d[c] = PowerSeries<Rational>.MultiplyCore(v, inv[c], t);

@@ -10,7 +10,7 @@ namespace Integrable.Tests.Hardening;
 /// computations that would otherwise run for minutes (the kernels poll the token inside one large
 /// multiplication, division or gcd, not only between steps). Exact iteration over Q is cancelled between
 /// steps only: one System.Numerics.BigInteger product cannot be interrupted.</summary>
-public class CancellationTests
+public class CancellationTests(Xunit.Abstractions.ITestOutputHelper output)
 {
     private static readonly TimeSpan Limit = TimeSpan.FromMilliseconds(100);
 
@@ -50,6 +50,7 @@ public class CancellationTests
     {
         // One retry absorbs a garbage-collection pause on a loaded machine; two misses fail.
         var first = Measure(Work[name]);
+        output.WriteLine($"{name}: cancelled {first.TotalMilliseconds:F1} ms after the request");
         if (first <= Limit) return;
         var second = Measure(Work[name]);
         Assert.True(second <= Limit, $"{name}: cancellation took {first.TotalMilliseconds:F0} ms, then {second.TotalMilliseconds:F0} ms");

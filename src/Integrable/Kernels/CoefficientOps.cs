@@ -407,11 +407,8 @@ internal struct Word192Ops : ICoefficientOps<long, Int192>
         Add(ref acc, l, m, h);
     }
 
-    public static void MulAddRow(ref Int192 dest, long a, ref long b, ref nint off, int count)
-    {
-        for (int j = 0; j < count; j++)
-            MulAdd(ref Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)), a, Unsafe.Add(ref b, j));
-    }
+    public static void MulAddRow(ref Int192 dest, long a, ref long b, ref nint off, int count) =>
+        CoefficientLoops.MulAddRow<Word192Ops, long, Int192>(ref dest, a, ref b, ref off, count);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Add(ref Int192 acc, ulong l, ulong m, ulong h)
@@ -427,24 +424,11 @@ internal struct Word192Ops : ICoefficientOps<long, Int192>
         acc.Hi = (long)((ulong)acc.Hi + h + c1);
     }
 
-    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulSubBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb)
-    {
-        for (int i = 0; i < na; i++)
-        {
-            ref Int192 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
-            long ai = Unsafe.Add(ref a, i);
-            for (int j = 0; j < nb; j++)
-                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
-        }
-    }
+    public static void MulSubBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref int lb, int nb) =>
+        CoefficientLoops.MulSubBlock<Word192Ops, long, Int192>(ref buf, ref a, ref la, na, ref b, ref lb, nb);
 
-    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref nint lb, int nb)
-    {
-        for (int i = 0; i < na; i++)
-            MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
-    }
+    public static void MulAddBlock(ref Int192 buf, ref long a, ref int la, int na, ref long b, ref nint lb, int nb) =>
+        CoefficientLoops.MulAddBlock<Word192Ops, long, Int192>(ref buf, ref a, ref la, na, ref b, ref lb, nb);
 
     public static void Set(out Int192 acc, long a)
     {
@@ -479,30 +463,14 @@ internal struct BigOps : ICoefficientOps<BigInteger, BigInteger>
 
     public static void MulSub(ref BigInteger acc, BigInteger a, BigInteger b) => acc -= a * b;
 
-    public static void MulAddRow(ref BigInteger dest, BigInteger a, ref BigInteger b, ref nint off, int count)
-    {
-        for (int j = 0; j < count; j++)
-            Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)) += a * Unsafe.Add(ref b, j);
-    }
+    public static void MulAddRow(ref BigInteger dest, BigInteger a, ref BigInteger b, ref nint off, int count) =>
+        CoefficientLoops.MulAddRow<BigOps, BigInteger, BigInteger>(ref dest, a, ref b, ref off, count);
 
-    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulSubBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref int lb, int nb)
-    {
-        for (int i = 0; i < na; i++)
-        {
-            ref BigInteger row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
-            BigInteger ai = Unsafe.Add(ref a, i);
-            for (int j = 0; j < nb; j++)
-                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
-        }
-    }
+    public static void MulSubBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref int lb, int nb) =>
+        CoefficientLoops.MulSubBlock<BigOps, BigInteger, BigInteger>(ref buf, ref a, ref la, na, ref b, ref lb, nb);
 
-    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref nint lb, int nb)
-    {
-        for (int i = 0; i < na; i++)
-            MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
-    }
+    public static void MulAddBlock(ref BigInteger buf, ref BigInteger a, ref int la, int na, ref BigInteger b, ref nint lb, int nb) =>
+        CoefficientLoops.MulAddBlock<BigOps, BigInteger, BigInteger>(ref buf, ref a, ref la, na, ref b, ref lb, nb);
 
     public static void Set(out BigInteger acc, BigInteger a) => acc = a;
 

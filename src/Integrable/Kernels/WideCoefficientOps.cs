@@ -238,30 +238,14 @@ internal struct Wide448Ops : ICoefficientOps<Magnitude192, Int448>
         }
     }
 
-    public static void MulAddRow(ref Int448 dest, Magnitude192 a, ref Magnitude192 b, ref nint off, int count)
-    {
-        for (int j = 0; j < count; j++)
-            MulAdd(ref Unsafe.AddByteOffset(ref dest, Unsafe.Add(ref off, j)), a, Unsafe.Add(ref b, j));
-    }
+    public static void MulAddRow(ref Int448 dest, Magnitude192 a, ref Magnitude192 b, ref nint off, int count) =>
+        CoefficientLoops.MulAddRow<Wide448Ops, Magnitude192, Int448>(ref dest, a, ref b, ref off, count);
 
-    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulSubBlock(ref Int448 buf, ref Magnitude192 a, ref int la, int na, ref Magnitude192 b, ref int lb, int nb)
-    {
-        for (int i = 0; i < na; i++)
-        {
-            ref Int448 row = ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i));
-            var ai = Unsafe.Add(ref a, i);
-            for (int j = 0; j < nb; j++)
-                MulSub(ref Unsafe.Add(ref row, Unsafe.Add(ref lb, j)), ai, Unsafe.Add(ref b, j));
-        }
-    }
+    public static void MulSubBlock(ref Int448 buf, ref Magnitude192 a, ref int la, int na, ref Magnitude192 b, ref int lb, int nb) =>
+        CoefficientLoops.MulSubBlock<Wide448Ops, Magnitude192, Int448>(ref buf, ref a, ref la, na, ref b, ref lb, nb);
 
-    [MethodImpl(MethodImplOptions.NoInlining | MethodImplOptions.AggressiveOptimization)]
-    public static void MulAddBlock(ref Int448 buf, ref Magnitude192 a, ref int la, int na, ref Magnitude192 b, ref nint lb, int nb)
-    {
-        for (int i = 0; i < na; i++)
-            MulAddRow(ref Unsafe.Add(ref buf, Unsafe.Add(ref la, i)), Unsafe.Add(ref a, i), ref b, ref lb, nb);
-    }
+    public static void MulAddBlock(ref Int448 buf, ref Magnitude192 a, ref int la, int na, ref Magnitude192 b, ref nint lb, int nb) =>
+        CoefficientLoops.MulAddBlock<Wide448Ops, Magnitude192, Int448>(ref buf, ref a, ref la, na, ref b, ref lb, nb);
 
     public static void Set(out Int448 acc, Magnitude192 a)
     {

@@ -19,6 +19,11 @@ public class CommandLineAppTests
         Assert.Equal(0, exit);
         Assert.Contains("all integers: yes", stdout);
         Assert.Contains("give the orbit of step 1: yes", stdout);
+        // The rest of the job on the same example (a scenario of our own; figures checked by hand on the orbit
+        // 1, 1, 1, 3, 5, 17, 29, 99, …: 17 = 6·3 − 1, 29 = 6·5 − 1, 99 = 6·17 − 3).
+        Assert.Contains("growth: linear", stdout);
+        Assert.Contains("functionally independent: 2 of the 2", stdout);
+        Assert.Contains("τ_{n+4} = 6 τ_{n+2} - τ_n", stdout);
     }
 
     [Theory]

@@ -313,4 +313,31 @@ public class IntegrableJsonTests
         var e = Assert.Throws<JsonException>(() => IntegrableJson.Deserialize<Integrable.Analyses.PeriodReport>(report.ToJson()));
         Assert.Contains("not read back", e.Message, StringComparison.Ordinal);
     }
+
+    private sealed record Point(Rational? X, Rational Y);
+
+    [Fact]
+    public void NullableRational_InUserRecord_NullStaysNull()
+    {
+        var p = new Point(null, new Rational(-1, 3));
+        string json = JsonSerializer.Serialize(p, IntegrableJson.Options);
+        Assert.Equal("""{"x":null,"y":"-1/3"}""", json);
+        Assert.Equal(p, JsonSerializer.Deserialize<Point>(json, IntegrableJson.Options));
+    }
+
+    [Fact]
+    public void SharedOptions_ParallelRoundTrips_SameAsSequential()
+    {
+        // the shared read-only options and the immutable values are used from many threads at once
+        var equations = Published.Select(row => ((string)row[0], (string?)row[1])).ToArray();
+        var sequential = equations.Select(e => IntegrableJson.Serialize(Recurrence.Parse(e.Item1, e.Item2))).ToArray();
+        var parallel = new string[64];
+        Parallel.For(0, parallel.Length, i =>
+        {
+            var e = equations[i % equations.Length];
+            var back = IntegrableJson.Deserialize<Recurrence>(IntegrableJson.Serialize(Recurrence.Parse(e.Item1, e.Item2)));
+            parallel[i] = IntegrableJson.Serialize(back);
+        });
+        for (int i = 0; i < parallel.Length; i++) Assert.Equal(sequential[i % equations.Length], parallel[i]);
+    }
 }

@@ -157,7 +157,7 @@ public sealed class SeriesSolution : IAnalysisReport
         writer.WriteEndObject();
         if (LimitValue is { } l)
         {
-            writer.WriteStartArray("limit");
+            writer.WriteStartArray("limitValue");   // not "limit": that name holds the budget limit below
             for (int d = 0; d <= Order; d++) writer.WriteStringValue(l[d].ToString());
             writer.WriteEndArray();
             writer.WriteNumber("window", Window);

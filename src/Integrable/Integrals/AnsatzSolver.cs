@@ -93,6 +93,9 @@ internal sealed class AnsatzSolver
         for (int b = 0; b < P; b++)
             for (int x = 0; x < XMonomials.Count; x++)
                 foreach (var t in tMon) cols.Add(new Column(b, x, t));
+        if (cols.Count > _options.MaxUnknowns)
+            throw new BudgetHit(BudgetLimit.Terms,
+                $"the ansatz of degree {_degree} has {cols.Count} unknown coefficients, more than MaxUnknowns = {_options.MaxUnknowns}");
         // Low degree first so that RREF kernel vectors (support left of their free column) are low-degree solutions.
         return [.. cols.OrderBy(c => XMonomials[c.X].Sum()).ThenBy(c => c.T.Sum()).ThenBy(c => c.Block)];
     }

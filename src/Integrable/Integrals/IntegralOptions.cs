@@ -34,7 +34,14 @@ public sealed record IntegralOptions
     /// factor); the search stops earlier as soon as the dimension bound is reached.</summary>
     public int MaxParameterDegree { get; init; } = 8;
 
-    /// <summary>Time limit (the other limits do not apply).</summary>
+    /// <summary>Largest number of unknown coefficients in one ansatz (monomials × parameter monomials × phases).
+    /// The sampled linear system is about that size squared (8 bytes an entry), so the default 6000 keeps it
+    /// under 300 MB; a larger ansatz stops the search with a partial report whose limit is
+    /// <see cref="BudgetLimit.Terms"/>.</summary>
+    /// <example>Degree 12 in 5 variables has 6187 monomials, just past the default.</example>
+    public int MaxUnknowns { get; init; } = 6000;
+
+    /// <summary>Time limit (the term and degree limits of <see cref="AnalysisBudget"/> do not apply; see <see cref="MaxUnknowns"/>).</summary>
     public AnalysisBudget Budget { get; init; } = AnalysisBudget.Default;
 
     /// <summary>Seed of the random points and primes.</summary>

@@ -83,9 +83,20 @@ public class BudgetTests
     public void Integrals_TimeLimit_PartialReportNamesTime()
     {
         var r = Integrable.Integrals.FirstIntegrals.Find(Somos5,
-            new Integrable.Integrals.IntegralOptions { Degree = 12, Budget = Only(b => b with { TimeLimit = Short }) });
+            new Integrable.Integrals.IntegralOptions { Degree = 11, Budget = Only(b => b with { TimeLimit = Short }) });
         Assert.Equal(BudgetLimit.Time, r.Limit);
         Assert.False(r.IsComplete);
+    }
+
+    [Fact]
+    public void Integrals_AnsatzTooLarge_PartialReportNamesTermsBeforeAllocating()
+    {
+        // Degree 12 in 5 variables: C(17, 5) − 1 = 6187 unknowns, past the default MaxUnknowns = 6000 (common knowledge: monomial counts).
+        var clock = System.Diagnostics.Stopwatch.StartNew();
+        var r = Integrable.Integrals.FirstIntegrals.Find(Somos5, new Integrable.Integrals.IntegralOptions { Degree = 12 });
+        Assert.Equal(BudgetLimit.Terms, r.Limit);
+        Assert.Contains("6187 unknown coefficients", r.LimitMessage);
+        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(5), $"took {clock.Elapsed}");
     }
 
     [Fact]

@@ -81,33 +81,7 @@ public sealed class IntegralMap
         var m = new RationalFunction[Dimension, Dimension];
         for (int i = 0; i < Dimension; i++)
             for (int j = 0; j < Dimension; j++) m[i, j] = c[i].Derivative(StateVariables[j]);
-        return Determinant(m, Field);
-    }
-
-    private static RationalFunction Determinant(RationalFunction[,] a, RationalFunctionField field)
-    {
-        int n = a.GetLength(0);
-        var m = (RationalFunction[,])a.Clone();
-        var det = field.One;
-        for (int col = 0; col < n; col++)
-        {
-            int pivot = -1;
-            for (int r = col; r < n; r++) if (!m[r, col].IsZero) { pivot = r; break; }
-            if (pivot < 0) return field.Zero;
-            if (pivot != col)
-            {
-                for (int j = 0; j < n; j++) (m[col, j], m[pivot, j]) = (m[pivot, j], m[col, j]);
-                det = -det;
-            }
-            det *= m[col, col];
-            for (int r = col + 1; r < n; r++)
-            {
-                if (m[r, col].IsZero) continue;
-                var f = m[r, col] / m[col, col];
-                for (int j = col; j < n; j++) m[r, j] -= f * m[col, j];
-            }
-        }
-        return det;
+        return RationalMap.Determinant(Field, m);
     }
 
     /// <summary>The map of an autonomous scalar recurrence of order k on (x_n, …, x_{n+k−1}).</summary>

@@ -58,14 +58,6 @@ internal static class CoefficientForm
         return true;
     }
 
-    /// <summary>Writes c_i = m_i / denominator with every |m_i| &lt; 2^191 in multi-limb form (the input of
-    /// the multi-limb path). Fails when some value does not fit.</summary>
-    public static bool TryMagnitudes(ReadOnlySpan<Rational> c, out Magnitude192[] magnitudes, out BigInteger denominator)
-    {
-        ToBig(c, out var ints, out denominator);
-        return TryMagnitudes(ints, out magnitudes);
-    }
-
     /// <summary>The multi-limb form of integer coefficients read straight from the rationals (no common
     /// denominator, no intermediate big integers for word-size values); false when some coefficient is not
     /// an integer or has 192 bits or more.</summary>

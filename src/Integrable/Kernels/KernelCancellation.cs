@@ -12,7 +12,7 @@ internal static class KernelCancellation
 {
     private static readonly AsyncLocal<TokenBox?> Current = new();
 
-    private sealed class TokenBox(CancellationToken token)
+    internal sealed class TokenBox(CancellationToken token)
     {
         public readonly CancellationToken Token = token;
     }
@@ -44,9 +44,9 @@ internal static class KernelCancellation
         private readonly TokenBox? _previous;
         private readonly bool _active;
 
-        internal Scope(object? previous, bool active)
+        internal Scope(TokenBox? previous, bool active)
         {
-            _previous = (TokenBox?)previous;
+            _previous = previous;
             _active = active;
         }
 

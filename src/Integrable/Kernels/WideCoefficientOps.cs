@@ -250,9 +250,16 @@ internal struct Wide448Ops : ICoefficientOps<Magnitude192, Int448>
     public static void Set(out Int448 acc, Magnitude192 a)
     {
         acc = default;
-        var one = new Magnitude192 { L0 = 1 };
-        if (a.Negative) Accumulate(ref acc, in a, in one, subtract: true);
-        else Accumulate(ref acc, in a, in one, subtract: false);
+        if (a.Negative) Sub3(ref acc, a.L0, a.L1, a.L2);
+        else { acc.W0 = a.L0; acc.W1 = a.L1; acc.W2 = a.L2; }
+    }
+
+    /// <summary>0 − (l0, l1, l2) in two's complement (acc is zero on entry).</summary>
+    private static void Sub3(ref Int448 acc, ulong l0, ulong l1, ulong l2)
+    {
+        ulong w0 = ~l0, w1 = ~l1, w2 = ~l2, rest = ulong.MaxValue;
+        if (++w0 == 0 && ++w1 == 0 && ++w2 == 0) rest = 0;
+        acc.W0 = w0; acc.W1 = w1; acc.W2 = w2; acc.W3 = rest; acc.W4 = rest; acc.W5 = rest; acc.W6 = rest;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

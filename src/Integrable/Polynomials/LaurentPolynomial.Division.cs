@@ -35,6 +35,52 @@ public sealed partial class LaurentPolynomial
         return true;
     }
 
+    /// <summary>The exchange step (a·b + c·d)/e computed exactly in one fused pass: Somos sequences,
+    /// T-systems, the octahedron recurrence and cluster mutations are made of it.</summary>
+    /// <param name="a">First factor of the first product.</param>
+    /// <param name="b">Second factor of the first product (may be <paramref name="a"/>: a square).</param>
+    /// <param name="c">First factor of the second product.</param>
+    /// <param name="d">Second factor of the second product.</param>
+    /// <param name="e">The divisor.</param>
+    /// <param name="quotient">The exact quotient when the call succeeds; the zero polynomial otherwise.</param>
+    /// <returns>True when <paramref name="e"/> divides a·b + c·d; false when it does not or is zero.
+    /// The answer is the same as <c>(a*b + c*d).TryDivideExact(e, out q)</c>.</returns>
+    /// <remarks>When all coefficients are small integers and both products are sparse, the two
+    /// products and their sum are kept in packed form and never built as polynomials; only the quotient
+    /// is (see <c>Kernels.ProductSumQuotient</c>). Otherwise the steps run one by one. Either way the
+    /// quotient is exact: the division's remainder reached zero.</remarks>
+    /// <example><code>
+    /// var r = new LaurentPolynomialRing("w", "x", "y", "z");
+    /// var (w, x, y, z) = (r.Variable(0), r.Variable(1), r.Variable(2), r.Variable(3));
+    /// LaurentPolynomial.TryDivideProductSum(z, x, y, y, w, out var next);   // Somos-4: (z·x + y²)/w
+    /// </code></example>
+    /// <exception cref="Algebra.IncompatibleRingException">The rings differ.</exception>
+    public static bool TryDivideProductSum(LaurentPolynomial a, LaurentPolynomial b, LaurentPolynomial c, LaurentPolynomial d,
+        LaurentPolynomial e, out LaurentPolynomial quotient)
+    {
+        ArgumentNullException.ThrowIfNull(a);
+        a.CheckRing(b);
+        a.CheckRing(c);
+        a.CheckRing(d);
+        a.CheckRing(e);
+        if (a.TermCount >= 2 && b.TermCount >= 2 && c.TermCount >= 2 && d.TermCount >= 2 && e.TermCount >= 2)
+        {
+            var status = ProductSumQuotient.TryRun(a._coeffs, a._exps, b._coeffs, b._exps, c._coeffs, c._exps,
+                d._coeffs, d._exps, e._coeffs, e._exps, a._ring.VariableCount, out var qc, out var qe);
+            if (status == FusedStatus.Exact)
+            {
+                quotient = new LaurentPolynomial(a._ring, qc, qe);
+                return true;
+            }
+            if (status == FusedStatus.NotDivisible)
+            {
+                quotient = a._ring.Zero;
+                return false;
+            }
+        }
+        return (a * b + c * d).TryDivideExact(e, out quotient);
+    }
+
     /// <summary>Exact division that reports a witness on failure.</summary>
     /// <param name="divisor">The divisor (same ring, non-zero).</param>
     /// <returns>On success, the quotient and a zero remainder. On failure, a quotient q and a non-zero

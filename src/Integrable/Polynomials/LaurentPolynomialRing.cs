@@ -20,7 +20,7 @@ namespace Integrable.Polynomials;
 /// var p = (x + y).Pow(2) * x.Pow(-1);   // x + 2*y + x^-1*y^2
 /// </code></example>
 [DebuggerDisplay("{ToString(),nq}")]
-public sealed class LaurentPolynomialRing : IRing<LaurentPolynomial>, IEquatable<LaurentPolynomialRing>
+public sealed class LaurentPolynomialRing : IRing<LaurentPolynomial>, IProductSumDivision<LaurentPolynomial>, IEquatable<LaurentPolynomialRing>
 {
     private readonly string[] _names;
     private readonly Dictionary<string, int> _index;
@@ -244,6 +244,10 @@ public sealed class LaurentPolynomialRing : IRing<LaurentPolynomial>, IEquatable
     /// <returns>False when <paramref name="b"/> does not divide <paramref name="a"/> (or is zero).</returns>
     public bool TryDivide(LaurentPolynomial a, LaurentPolynomial b, out LaurentPolynomial quotient) =>
         Own(a).TryDivideExact(b, out quotient);
+
+    bool IProductSumDivision<LaurentPolynomial>.TryDivideProductSum(LaurentPolynomial a, LaurentPolynomial b, LaurentPolynomial c,
+        LaurentPolynomial d, LaurentPolynomial e, out LaurentPolynomial quotient) =>
+        LaurentPolynomial.TryDivideProductSum(Own(a), b, c, d, e, out quotient);
 
     private LaurentPolynomial Own(LaurentPolynomial a)
     {

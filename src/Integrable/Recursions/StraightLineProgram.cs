@@ -23,7 +23,12 @@ public sealed class StraightLineProgram
         Constants = constants;
         Instructions = instructions;
         Outputs = outputs;
+        _fusion = PlanFusion(instructions, outputs);
     }
+
+    // Per instruction: 0 = evaluate normally, -1 = skipped (a single-use part of a fused step),
+    // 1 = a division (a·b + c·d)/e evaluated as one fused step; null when nothing fuses.
+    private readonly sbyte[]? _fusion;
 
     /// <summary>Number of input slots.</summary>
     public int InputCount { get; }
@@ -68,9 +73,15 @@ public sealed class StraightLineProgram
         var constants = new T[Constants.Length];
         for (int i = 0; i < constants.Length; i++) constants[i] = ring.FromRational(Constants[i]);
         var v = new T[Instructions.Length];
+        var fused = _fusion is not null ? ring as IProductSumDivision<T> : null;
         for (int i = 0; i < v.Length; i++)
         {
             var ins = Instructions[i];
+            if (fused is not null && _fusion![i] != 0)
+            {
+                if (_fusion[i] > 0) v[i] = DivideProductSum(ring, fused, v, ins, i);
+                continue;
+            }
             v[i] = ins.Op switch
             {
                 ProgramOp.Input => inputs[ins.A],
@@ -85,6 +96,51 @@ public sealed class StraightLineProgram
             };
         }
         for (int i = 0; i < outputs.Length; i++) outputs[i] = v[Outputs[i]];
+    }
+
+    /// <summary>Marks each division whose dividend is a single-use sum of two single-use products
+    /// (a square x^2 counts as x·x) for the fused exchange step of <see cref="IProductSumDivision{T}"/>.</summary>
+    private static sbyte[]? PlanFusion(ImmutableArray<ProgramInstruction> code, ImmutableArray<int> outputs)
+    {
+        var uses = new int[code.Length];
+        foreach (var ins in code)
+        {
+            switch (ins.Op)
+            {
+                case ProgramOp.Add or ProgramOp.Subtract or ProgramOp.Multiply or ProgramOp.Divide:
+                    uses[ins.A]++; uses[ins.B]++; break;
+                case ProgramOp.Negate or ProgramOp.Power:
+                    uses[ins.A]++; break;
+            }
+        }
+        foreach (int o in outputs) uses[o]++;
+        sbyte[]? plan = null;
+        for (int i = 0; i < code.Length; i++)
+        {
+            var div = code[i];
+            if (div.Op != ProgramOp.Divide || code[div.A].Op != ProgramOp.Add || uses[div.A] != 1) continue;
+            var sum = code[div.A];
+            if (sum.A == sum.B || !IsProduct(code[sum.A]) || !IsProduct(code[sum.B]) || uses[sum.A] != 1 || uses[sum.B] != 1) continue;
+            plan ??= new sbyte[code.Length];
+            plan[i] = 1;
+            plan[div.A] = plan[sum.A] = plan[sum.B] = -1;
+        }
+        return plan;
+
+        static bool IsProduct(ProgramInstruction ins) => ins.Op == ProgramOp.Multiply || (ins.Op == ProgramOp.Power && ins.B == 2);
+    }
+
+    private T DivideProductSum<T>(IRing<T> ring, IProductSumDivision<T> fused, T[] v, ProgramInstruction div, int step)
+    {
+        var sum = Instructions[div.A];
+        var (p, q) = (Instructions[sum.A], Instructions[sum.B]);
+        T a = v[p.A], b = p.Op == ProgramOp.Power ? a : v[p.B];
+        T c = v[q.A], d = q.Op == ProgramOp.Power ? c : v[q.B];
+        T e = v[div.B];
+        if (ring.IsZero(e)) throw new ProgramEvaluationException(step, $"division by zero at instruction {step}");
+        if (!fused.TryDivideProductSum(a, b, c, d, e, out var quotient))
+            throw new ProgramEvaluationException(step, $"division at instruction {step} is not exact in {ring}");
+        return quotient;
     }
 
     private static T Divide<T>(IRing<T> ring, T a, T b, int step)

@@ -141,6 +141,7 @@ public sealed class StraightLineProgramBuilder
     {
         Check(a);
         if (IsConstant(a, out var ca)) return Constant(-ca);
+        if (_instructions[a].Op == ProgramOp.Negate) return _instructions[a].A;   // −(−x) = x
         return Emit(new ProgramInstruction(ProgramOp.Negate, a, 0));
     }
 

@@ -64,4 +64,35 @@ public class StraightLineProgramTests
         Assert.Equal(new Rational(1, 8), p.Evaluate(RationalField.Instance, [new Rational(2)]));
         Assert.Throws<ArgumentException>(() => p.Evaluate(RationalField.Instance, [Rational.One, Rational.One]));
     }
+
+    [Fact]
+    public void Builder_DoubleNegation_Cancels()
+    {
+        var b = new StraightLineProgramBuilder(1);
+        var p = b.Build(b.Negate(b.Negate(b.Input(0))));
+        Assert.Single(p.Instructions);
+        Assert.Equal(new Rational(5), p.Evaluate(RationalField.Instance, [new Rational(5)]));
+    }
+
+    [Fact]
+    public void Evaluate_ExchangeDivisionInLaurentRing_IsFusedAndExact()
+    {
+        // (x·y + z²)/w with single-use products: the fused exchange step of the Laurent ring.
+        var b = new StraightLineProgramBuilder(4);
+        var p = b.Build(b.Divide(b.Add(b.Multiply(b.Input(0), b.Input(1)), b.Power(b.Input(2), 2)), b.Input(3)));
+        var r = new Integrable.Polynomials.LaurentPolynomialRing("s", "t");
+        var s = r.Variable(0);
+        var t = r.Variable(1);
+        var w = s + t;
+        int before = Integrable.Kernels.ProductSumQuotient.Answered;
+        var q = p.Evaluate(r, [w * (s + 1), s - t, w, w]);
+        Assert.True(Integrable.Kernels.ProductSumQuotient.Answered > before);
+        Assert.Equal((s + 1) * (s - t) + w, q);
+        // not exact: the same typed error, naming the instruction, as the unfused division
+        var e = Assert.Throws<ProgramEvaluationException>(() => p.Evaluate(r, [s + 1, t + 1, s + 2, s + t + 7]));
+        Assert.Equal(p.Instructions.Length - 1, e.Instruction);
+        Assert.Throws<ProgramEvaluationException>(() => p.Evaluate(r, [s + 1, t + 1, s + 2, r.Zero]));
+        // other rings evaluate the same program step by step
+        Assert.Equal(new Rational(7, 4), p.Evaluate(RationalField.Instance, [new Rational(2), new Rational(3), new Rational(1), new Rational(4)]));
+    }
 }

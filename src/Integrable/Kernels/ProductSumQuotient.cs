@@ -227,6 +227,25 @@ internal static class ProductSumQuotient
             maxAbs = max;
             return k;
         }
+        if (words == 2)
+        {
+            while (i < n1 && j < n2)
+            {
+                ulong xh = e1[2 * i], yh = e2[2 * j], xl = e1[2 * i + 1], yl = e2[2 * j + 1];
+                long c;
+                if (xh > yh || (xh == yh && xl > yl)) { es[2 * k] = xh; es[2 * k + 1] = xl; c = c1[i++]; }
+                else if (xh != yh || xl != yl) { es[2 * k] = yh; es[2 * k + 1] = yl; c = c2[j++]; }
+                else
+                {
+                    c = c1[i++] + c2[j++];
+                    if (c == 0) continue;
+                    es[2 * k] = xh; es[2 * k + 1] = xl;
+                }
+                cs[k++] = c;
+                long m = Math.Abs(c);
+                if (m > max) max = m;
+            }
+        }
         while (i < n1 && j < n2)
         {
             if ((++polls & 0xFFFF) == 0) KernelCancellation.Poll();

@@ -77,7 +77,7 @@ public sealed class HeapKernelWorkload : IWorkload
             {
                 var oe = Pool.Rent<ulong>(2 * 2 * p.Cb.Length);
                 var oc = Pool.Rent<long>(2 * p.Cb.Length);
-                total += one ? PolynomialMultiply.MultiplyHeapN<Word64Ops, long, long>(p.A, p.Ca, p.B, p.Cb, p.Words, ref oe, ref oc);
+                total += PolynomialMultiply.MultiplyHeapN<Word64Ops, long, long>(p.A, p.Ca, p.B, p.Cb, p.Words, ref oe, ref oc);
                 Pool.Return(oe);
                 Pool.Return(oc);
             }

@@ -5,33 +5,107 @@ namespace Integrable.Kernels;
 
 internal static partial class PolynomialMultiply
 {
-    /// <summary>One heap slot: a packed exponent and the head of the chain of rows sharing it.</summary>
-    private struct HeapEntry
+    /// <summary>A packed exponent of a fixed number of words held by value in a heap entry, so that
+    /// comparisons and sums are inlined register operations (no indirection through a row buffer).</summary>
+    internal interface IPackedKey<TSelf> where TSelf : struct, IPackedKey<TSelf>
     {
-        public ulong Exp;
+        /// <summary>Words per term.</summary>
+        static abstract int Words { get; }
+
+        /// <summary>The sum of term <paramref name="i"/> of <paramref name="a"/> and term
+        /// <paramref name="j"/> of <paramref name="b"/> (fields never overflow, so word-wise addition).</summary>
+        static abstract TSelf Sum(ref ulong a, int i, ref ulong b, int j);
+
+        /// <summary>x &gt; y in the lexicographic order of the words (word 0 most significant).</summary>
+        static abstract bool Greater(TSelf x, TSelf y);
+
+        /// <summary>x = y.</summary>
+        static abstract bool Same(TSelf x, TSelf y);
+
+        /// <summary>Writes the words of <paramref name="x"/> at <paramref name="dst"/>.</summary>
+        static abstract void Store(ref ulong dst, TSelf x);
+    }
+
+    /// <summary>One packed word.</summary>
+    internal struct Key1 : IPackedKey<Key1>
+    {
+        public ulong W;
+        public static int Words => 1;
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static Key1 Sum(ref ulong a, int i, ref ulong b, int j) => new() { W = Unsafe.Add(ref a, i) + Unsafe.Add(ref b, j) };
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static bool Greater(Key1 x, Key1 y) => x.W > y.W;
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static bool Same(Key1 x, Key1 y) => x.W == y.W;
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static void Store(ref ulong dst, Key1 x) => dst = x.W;
+    }
+
+    /// <summary>Two packed words, compared high word first.</summary>
+    internal struct Key2 : IPackedKey<Key2>
+    {
+        public ulong Hi, Lo;
+        public static int Words => 2;
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static Key2 Sum(ref ulong a, int i, ref ulong b, int j)
+        {
+            ref ulong x = ref Unsafe.Add(ref a, 2 * i);
+            ref ulong y = ref Unsafe.Add(ref b, 2 * j);
+            return new() { Hi = x + y, Lo = Unsafe.Add(ref x, 1) + Unsafe.Add(ref y, 1) };
+        }
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static bool Greater(Key2 x, Key2 y) => x.Hi > y.Hi || (x.Hi == y.Hi && x.Lo > y.Lo);
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static bool Same(Key2 x, Key2 y) => x.Hi == y.Hi && x.Lo == y.Lo;
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        public static void Store(ref ulong dst, Key2 x) { dst = x.Hi; Unsafe.Add(ref dst, 1) = x.Lo; }
+    }
+
+    /// <summary>One heap slot: a packed exponent and the head of the chain of rows sharing it.</summary>
+    private struct HeapEntry<TKey> where TKey : struct
+    {
+        public TKey Exp;
         public int Head;
     }
 
-    /// <summary>Johnson's heap multiplication on single-word packed exponents, with chaining of equal
-    /// exponents in the heap and delayed insertion of (i, j) until (i−1, j) has been consumed
-    /// (Monagan and Pearce, "Parallel sparse polynomial multiplication using heaps", ISSAC 2009).</summary>
-    /// <remarks>Terms of both inputs are sorted by descending packed exponent; so is the output.
-    /// <paramref name="ea"/> should be the shorter input: the heap never holds more than one entry
-    /// per term of it. Returns the number of output terms written to <paramref name="oe"/> /
-    /// <paramref name="oc"/> (grown as needed).</remarks>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    /// <summary>Johnson's heap multiplication on single-word packed exponents
+    /// (<see cref="MultiplyHeapK"/> with one word).</summary>
     internal static int MultiplyHeap1<TOps, TC, TAcc>(
         ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ReadOnlySpan<ulong> eb, ReadOnlySpan<TC> cb,
         ref ulong[] oe, ref TAcc[] oc)
         where TOps : ICoefficientOps<TC, TAcc>
+        => MultiplyHeapK<Key1, TOps, TC, TAcc>(ea, ca, eb, cb, ref oe, ref oc);
+
+    /// <summary>Johnson's heap multiplication on two-word packed exponents (word 0 most significant;
+    /// <see cref="MultiplyHeapK"/> with two words): same output layout as <see cref="MultiplyHeapN"/>.</summary>
+    internal static int MultiplyHeap2<TOps, TC, TAcc>(
+        ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ReadOnlySpan<ulong> eb, ReadOnlySpan<TC> cb,
+        ref ulong[] oe, ref TAcc[] oc)
+        where TOps : ICoefficientOps<TC, TAcc>
+        => MultiplyHeapK<Key2, TOps, TC, TAcc>(ea, ca, eb, cb, ref oe, ref oc);
+
+    /// <summary>Johnson's heap multiplication on packed exponents of a fixed number of words held
+    /// inline in the heap entries, with chaining of equal exponents in the heap and delayed insertion
+    /// of (i, j) until (i−1, j) has been consumed (Monagan and Pearce, "Parallel sparse polynomial
+    /// multiplication using heaps", ISSAC 2009).</summary>
+    /// <remarks>Terms of both inputs are sorted by descending packed exponent; so is the output
+    /// (<typeparamref name="TKey"/>.Words words per term). <paramref name="ca"/> should be the shorter
+    /// input: the heap never holds more than one entry per term of it. Returns the number of output
+    /// terms written to <paramref name="oe"/> / <paramref name="oc"/> (grown as needed).</remarks>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    internal static int MultiplyHeapK<TKey, TOps, TC, TAcc>(
+        ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ReadOnlySpan<ulong> eb, ReadOnlySpan<TC> cb,
+        ref ulong[] oe, ref TAcc[] oc)
+        where TKey : struct, IPackedKey<TKey>
+        where TOps : ICoefficientOps<TC, TAcc>
     {
-        int n = ea.Length, m = eb.Length;
-        var heapArr = new HeapEntry[n + 1];
+        int n = ca.Length, m = cb.Length, W = TKey.Words;
+        var heapArr = new HeapEntry<TKey>[n + 1];
         var njArr = new int[n];
         var nextArr = new int[n];
         var hindArr = new int[n];
         var storeArr = new int[2 * n];
-        ref HeapEntry heap = ref MemoryMarshal.GetArrayDataReference(heapArr);
+        ref HeapEntry<TKey> heap = ref MemoryMarshal.GetArrayDataReference(heapArr);
         ref int nj = ref MemoryMarshal.GetArrayDataReference(njArr);
         ref int next = ref MemoryMarshal.GetArrayDataReference(nextArr);
         ref int hind = ref MemoryMarshal.GetArrayDataReference(hindArr);
@@ -44,7 +118,7 @@ internal static partial class PolynomialMultiply
 
         // hind[i] = 2·(next column to insert for row i) + (1 if row i is not in the heap).
         int hlen = 2, nextLoc = int.MaxValue, count = 0;
-        Unsafe.Add(ref heap, 1).Exp = pa + pb;
+        Unsafe.Add(ref heap, 1).Exp = TKey.Sum(ref pa, 0, ref pb, 0);
         Unsafe.Add(ref heap, 1).Head = 0;
         next = -1;
         nj = 0;
@@ -54,7 +128,7 @@ internal static partial class PolynomialMultiply
         while (hlen > 1)
         {
             if ((++polls & 1023) == 0) KernelCancellation.Poll();
-            ulong exp = Unsafe.Add(ref heap, 1).Exp;
+            TKey exp = Unsafe.Add(ref heap, 1).Exp;
             TOps.Set(out TAcc acc, default!);
             int sp = 0;
             do
@@ -72,7 +146,7 @@ internal static partial class PolynomialMultiply
                     TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
                     r = Unsafe.Add(ref next, r);
                 } while (r >= 0);
-            } while (hlen > 1 && Unsafe.Add(ref heap, 1).Exp == exp);
+            } while (hlen > 1 && TKey.Same(Unsafe.Add(ref heap, 1).Exp, exp));
 
             while (sp > 0)
             {
@@ -81,21 +155,21 @@ internal static partial class PolynomialMultiply
                 if (i + 1 < n && Unsafe.Add(ref hind, i + 1) == 2 * j + 1)
                 {
                     Unsafe.Add(ref nj, i + 1) = j;
-                    Insert1(ref heap, ref next, ref hlen, ref nextLoc, i + 1, Unsafe.Add(ref pa, i + 1) + Unsafe.Add(ref pb, j));
+                    Insert(ref heap, ref next, ref hlen, ref nextLoc, i + 1, TKey.Sum(ref pa, i + 1, ref pb, j));
                     Unsafe.Add(ref hind, i + 1) = 2 * (j + 1);
                 }
                 if (j + 1 < m && (Unsafe.Add(ref hind, i) & 1) == 1 && (i == 0 || Unsafe.Add(ref hind, i - 1) >= 2 * (j + 2) + 1))
                 {
                     Unsafe.Add(ref nj, i) = j + 1;
-                    Insert1(ref heap, ref next, ref hlen, ref nextLoc, i, Unsafe.Add(ref pa, i) + Unsafe.Add(ref pb, j + 1));
+                    Insert(ref heap, ref next, ref hlen, ref nextLoc, i, TKey.Sum(ref pa, i, ref pb, j + 1));
                     Unsafe.Add(ref hind, i) = 2 * (j + 2);
                 }
             }
 
             if (!TOps.IsZero(in acc))
             {
-                if (count == oc.Length || count == oe.Length) Grow(ref oe, ref oc, count);
-                oe[count] = exp;
+                if ((count + 1) * W > oe.Length || count == oc.Length) GrowN(ref oe, ref oc, count + 1, W);
+                TKey.Store(ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(oe), count * W), exp);
                 oc[count] = acc;
                 count++;
             }
@@ -107,13 +181,13 @@ internal static partial class PolynomialMultiply
     /// moves down to a leaf along the larger children (one comparison per level), then the last
     /// entry is sifted up from there; it is usually small, so that second phase is short.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void PopRoot(ref HeapEntry heap, int last)
+    private static void PopRoot<TKey>(ref HeapEntry<TKey> heap, int last) where TKey : struct, IPackedKey<TKey>
     {
-        HeapEntry x = Unsafe.Add(ref heap, last);
+        HeapEntry<TKey> x = Unsafe.Add(ref heap, last);
         int hole = 1, c = 2;
         while (c < last)
         {
-            if (c + 1 < last && Unsafe.Add(ref heap, c + 1).Exp > Unsafe.Add(ref heap, c).Exp) c++;
+            if (c + 1 < last && TKey.Greater(Unsafe.Add(ref heap, c + 1).Exp, Unsafe.Add(ref heap, c).Exp)) c++;
             Unsafe.Add(ref heap, hole) = Unsafe.Add(ref heap, c);
             hole = c;
             c <<= 1;
@@ -121,7 +195,7 @@ internal static partial class PolynomialMultiply
         while (hole > 1)
         {
             int p = hole >> 1;
-            if (Unsafe.Add(ref heap, p).Exp >= x.Exp) break;
+            if (!TKey.Greater(x.Exp, Unsafe.Add(ref heap, p).Exp)) break;
             Unsafe.Add(ref heap, hole) = Unsafe.Add(ref heap, p);
             hole = p;
         }
@@ -131,22 +205,23 @@ internal static partial class PolynomialMultiply
     /// <summary>Inserts row <paramref name="row"/> with exponent <paramref name="e"/>, chaining it to
     /// an existing entry with the same exponent when one is found on the way to the root.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void Insert1(ref HeapEntry heap, ref int next, ref int hlen, ref int nextLoc, int row, ulong e)
+    private static void Insert<TKey>(ref HeapEntry<TKey> heap, ref int next, ref int hlen, ref int nextLoc, int row, TKey e)
+        where TKey : struct, IPackedKey<TKey>
     {
-        ref HeapEntry top = ref Unsafe.Add(ref heap, 1);
-        if (hlen > 1 && top.Exp == e) { Unsafe.Add(ref next, row) = top.Head; top.Head = row; return; }
+        ref HeapEntry<TKey> top = ref Unsafe.Add(ref heap, 1);
+        if (hlen > 1 && TKey.Same(top.Exp, e)) { Unsafe.Add(ref next, row) = top.Head; top.Head = row; return; }
         if (nextLoc < hlen)
         {
-            ref HeapEntry nl = ref Unsafe.Add(ref heap, nextLoc);
-            if (nl.Exp == e) { Unsafe.Add(ref next, row) = nl.Head; nl.Head = row; return; }
+            ref HeapEntry<TKey> nl = ref Unsafe.Add(ref heap, nextLoc);
+            if (TKey.Same(nl.Exp, e)) { Unsafe.Add(ref next, row) = nl.Head; nl.Head = row; return; }
         }
         int pos = hlen, j = pos;
         while (j > 1)
         {
             int p = j >> 1;
-            ref HeapEntry pe = ref Unsafe.Add(ref heap, p);
-            if (pe.Exp == e) { Unsafe.Add(ref next, row) = pe.Head; pe.Head = row; nextLoc = p; return; }
-            if (pe.Exp < e) j = p; else break;
+            ref HeapEntry<TKey> pe = ref Unsafe.Add(ref heap, p);
+            if (TKey.Same(pe.Exp, e)) { Unsafe.Add(ref next, row) = pe.Head; pe.Head = row; nextLoc = p; return; }
+            if (TKey.Greater(e, pe.Exp)) j = p; else break;
         }
         hlen++;
         int k = pos;
@@ -156,14 +231,14 @@ internal static partial class PolynomialMultiply
             Unsafe.Add(ref heap, k) = Unsafe.Add(ref heap, p);
             k = p;
         }
-        ref HeapEntry slot = ref Unsafe.Add(ref heap, j);
+        ref HeapEntry<TKey> slot = ref Unsafe.Add(ref heap, j);
         slot.Exp = e;
         slot.Head = row;
         Unsafe.Add(ref next, row) = -1;
     }
 
     /// <summary>Johnson's heap multiplication on multi-word packed exponents (<paramref name="words"/>
-    /// words per term, word 0 most significant). Same algorithm as <see cref="MultiplyHeap1"/>; each
+    /// words per term, word 0 most significant). Same algorithm as <see cref="MultiplyHeapK"/>; each
     /// row's current exponent is kept in a row buffer and the heap holds row indices.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static int MultiplyHeapN<TOps, TC, TAcc>(
@@ -287,12 +362,6 @@ internal static partial class PolynomialMultiply
     private static void AddN(ReadOnlySpan<ulong> a, ReadOnlySpan<ulong> b, Span<ulong> r)
     {
         for (int w = 0; w < r.Length; w++) r[w] = a[w] + b[w];
-    }
-
-    private static void Grow<TE, TAcc>(ref TE[] oe, ref TAcc[] oc, int count)
-    {
-        Pool.Grow(ref oe, count, count + 1);
-        Pool.Grow(ref oc, count, count + 1);
     }
 
     private static void GrowN<TAcc>(ref ulong[] oe, ref TAcc[] oc, int needed, int words)

@@ -27,8 +27,8 @@ namespace Integrable.Kernels;
 /// (1+x+y+2z²+3t³+5u⁵)^8·(1+u+t+2z²+3y³+5x⁵)^8 it has 8.6·10⁷ cells for 1.7·10⁶ products and the
 /// heap is chosen. Windows are aligned to the trailing variables when such a slice fits in
 /// <see cref="DenseBufferBytes"/> (see <see cref="DenseWindow"/>).</item>
-/// <item>Otherwise Johnson's heap method (<see cref="MultiplyHeap1"/> on one packed word when the
-/// summed exponent ranges fit in 64 bits, <see cref="MultiplyHeapN"/> on several words), whose
+/// <item>Otherwise Johnson's heap method (<see cref="MultiplyHeap1"/> / <see cref="MultiplyHeap2"/> on one / two packed
+/// words with the exponent held in the heap entries, <see cref="MultiplyHeapN"/> on more words), whose
 /// memory and time follow the number of terms whatever the degrees.</item>
 /// </list>
 /// <para>Thresholds are <c>internal static</c>; <see cref="Force"/> and
@@ -178,6 +178,9 @@ internal static partial class PolynomialMultiply
             if (N == 1)
                 count = swap ? MultiplyHeap1<TOps, TC, TAcc>(rb, cb, ra, ca, ref oe, ref acc)
                              : MultiplyHeap1<TOps, TC, TAcc>(ra, ca, rb, cb, ref oe, ref acc);
+            else if (N == 2)
+                count = swap ? MultiplyHeap2<TOps, TC, TAcc>(rb, cb, ra, ca, ref oe, ref acc)
+                             : MultiplyHeap2<TOps, TC, TAcc>(ra, ca, rb, cb, ref oe, ref acc);
             else
                 count = swap ? MultiplyHeapN<TOps, TC, TAcc>(rb, cb, ra, ca, N, ref oe, ref acc)
                              : MultiplyHeapN<TOps, TC, TAcc>(ra, ca, rb, cb, N, ref oe, ref acc);

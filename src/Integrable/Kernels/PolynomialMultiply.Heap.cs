@@ -92,11 +92,43 @@ internal static partial class PolynomialMultiply
     /// (<typeparamref name="TKey"/>.Words words per term). <paramref name="ca"/> should be the shorter
     /// input: the heap never holds more than one entry per term of it. Returns the number of output
     /// terms written to <paramref name="oe"/> / <paramref name="oc"/> (grown as needed).</remarks>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static int MultiplyHeapK<TKey, TOps, TC, TAcc>(
         ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ReadOnlySpan<ulong> eb, ReadOnlySpan<TC> cb,
         ref ulong[] oe, ref TAcc[] oc)
         where TKey : struct, IPackedKey<TKey>
+        where TOps : ICoefficientOps<TC, TAcc>
+        => HeapProduct<TKey, Product, TOps, TC, TAcc>(ea, ca, eb, cb, ref oe, ref oc);
+
+    /// <summary>Squaring A·A by the heap on the upper triangle i ≤ j of the product table: the diagonal
+    /// term a_i² once and a_i·a_j (i &lt; j) twice, so about half the heap operations of a product.
+    /// Row i starts at column i; it waits for (i−1, i) exactly as a row of a product waits for the
+    /// row above, so the delayed-insertion invariant of <see cref="MultiplyHeapK"/> carries over.
+    /// The accumulated terms are those of the full product, so the same accumulator bound holds.</summary>
+    internal static int SquareHeapK<TKey, TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ref ulong[] oe, ref TAcc[] oc)
+        where TKey : struct, IPackedKey<TKey>
+        where TOps : ICoefficientOps<TC, TAcc>
+        => HeapProduct<TKey, Square, TOps, TC, TAcc>(ea, ca, ea, ca, ref oe, ref oc);
+
+    /// <summary>Squaring with one, two or more packed words (see <see cref="SquareHeapK"/>).</summary>
+    internal static int SquareHeap<TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, int words, ref ulong[] oe, ref TAcc[] oc)
+        where TOps : ICoefficientOps<TC, TAcc> => words switch
+        {
+            1 => SquareHeapK<Key1, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
+            2 => SquareHeapK<Key2, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
+            _ => -1,
+        };
+
+    /// <summary>Compile-time choice between a product and a square in <see cref="HeapProduct"/>.</summary>
+    private interface IHeapShape { static abstract bool IsSquare { get; } }
+    private struct Product : IHeapShape { public static bool IsSquare => false; }
+    private struct Square : IHeapShape { public static bool IsSquare => true; }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static int HeapProduct<TKey, TShape, TOps, TC, TAcc>(
+        ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ReadOnlySpan<ulong> eb, ReadOnlySpan<TC> cb,
+        ref ulong[] oe, ref TAcc[] oc)
+        where TKey : struct, IPackedKey<TKey>
+        where TShape : struct, IHeapShape
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int n = ca.Length, m = cb.Length, W = TKey.Words;
@@ -114,7 +146,8 @@ internal static partial class PolynomialMultiply
         ref ulong pb = ref MemoryMarshal.GetReference(eb);
         ref TC qa = ref MemoryMarshal.GetReference(ca);
         ref TC qb = ref MemoryMarshal.GetReference(cb);
-        for (int i = 1; i < n; i++) Unsafe.Add(ref hind, i) = 1;
+        // A square's row i starts at column i (the triangle i ≤ j), a product's at column 0.
+        for (int i = 1; i < n; i++) Unsafe.Add(ref hind, i) = TShape.IsSquare ? 2 * i + 1 : 1;
 
         // hind[i] = 2·(next column to insert for row i) + (1 if row i is not in the heap).
         int hlen = 2, nextLoc = int.MaxValue, count = 0;
@@ -144,6 +177,7 @@ internal static partial class PolynomialMultiply
                     Unsafe.Add(ref store, sp + 1) = j;
                     sp += 2;
                     TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
+                    if (TShape.IsSquare && r != j) TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
                     r = Unsafe.Add(ref next, r);
                 } while (r >= 0);
             } while (hlen > 1 && TKey.Same(Unsafe.Add(ref heap, 1).Exp, exp));

@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using System.Numerics;
 using System.Runtime.CompilerServices;
 using Integrable.Numbers;
@@ -67,22 +68,26 @@ internal static partial class PolynomialMultiply
         int nvars, out Rational[] coeffs, out int[] exps)
     {
         var shape = new ProductShape(ea, eb, ca.Length, cb.Length, nvars);
+        // A·A (the same arrays, as in x^2 or p * p): the heap squares on the triangle i ≤ j.
+        bool square = ca.Length == cb.Length && ea.Length == eb.Length &&
+            Unsafe.AreSame(ref MemoryMarshal.GetReference(ea), ref MemoryMarshal.GetReference(eb)) &&
+            Unsafe.AreSame(ref MemoryMarshal.GetReference(ca), ref MemoryMarshal.GetReference(cb));
         if (CoefficientForm.TryWords(ca, out var wa, out long da) && CoefficientForm.TryWords(cb, out var wb, out long db))
         {
             var den = (BigInteger)da * db;
             switch (SelectAccumulator(wa, wb))
             {
-                case Accumulator.Word64: Run<Word64Ops, long, long>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
-                case Accumulator.Split96: Run<UWord96Ops, long, Split96>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
-                case Accumulator.Unsigned128: Run<UWord128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
-                case Accumulator.Word128: Run<Word128Ops, long, Int128>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
-                default: Run<Word192Ops, long, Int192>(wa, ea, wb, eb, in shape, den, out coeffs, out exps); break;
+                case Accumulator.Word64: Run<Word64Ops, long, long>(wa, ea, wb, eb, in shape, square, den, out coeffs, out exps); break;
+                case Accumulator.Split96: Run<UWord96Ops, long, Split96>(wa, ea, wb, eb, in shape, square, den, out coeffs, out exps); break;
+                case Accumulator.Unsigned128: Run<UWord128Ops, long, Int128>(wa, ea, wb, eb, in shape, square, den, out coeffs, out exps); break;
+                case Accumulator.Word128: Run<Word128Ops, long, Int128>(wa, ea, wb, eb, in shape, square, den, out coeffs, out exps); break;
+                default: Run<Word192Ops, long, Int192>(wa, ea, wb, eb, in shape, square, den, out coeffs, out exps); break;
             }
             return;
         }
         if (!ForceBig && CoefficientForm.TryIntegerMagnitudes(ca, out var ia) && CoefficientForm.TryIntegerMagnitudes(cb, out var ib))
         {
-            Run<Wide448Ops, Magnitude192, Int448>(ia, ea, ib, eb, in shape, BigInteger.One, out coeffs, out exps);
+            Run<Wide448Ops, Magnitude192, Int448>(ia, ea, ib, eb, in shape, square, BigInteger.One, out coeffs, out exps);
             return;
         }
         CoefficientForm.ToBig(ca, out var ba, out var bda);
@@ -90,10 +95,10 @@ internal static partial class PolynomialMultiply
         // Up to 191-bit numerators: multi-limb accumulation (sums stay below 2^447 for fewer than 2^64 products).
         if (!ForceBig && CoefficientForm.TryMagnitudes(ba, out var ma) && CoefficientForm.TryMagnitudes(bb, out var mb))
         {
-            Run<Wide448Ops, Magnitude192, Int448>(ma, ea, mb, eb, in shape, bda * bdb, out coeffs, out exps);
+            Run<Wide448Ops, Magnitude192, Int448>(ma, ea, mb, eb, in shape, square, bda * bdb, out coeffs, out exps);
             return;
         }
-        Run<BigOps, BigInteger, BigInteger>(ba, ea, bb, eb, in shape, bda * bdb, out coeffs, out exps);
+        Run<BigOps, BigInteger, BigInteger>(ba, ea, bb, eb, in shape, square, bda * bdb, out coeffs, out exps);
     }
 
     /// <summary>The narrowest accumulator that holds every partial sum of a product coefficient
@@ -121,7 +126,7 @@ internal static partial class PolynomialMultiply
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Run<TOps, TC, TAcc>(TC[] ca, ReadOnlySpan<int> ea, TC[] cb, ReadOnlySpan<int> eb,
-        in ProductShape s, BigInteger den, out Rational[] coeffs, out int[] exps)
+        in ProductShape s, bool square, BigInteger den, out Rational[] coeffs, out int[] exps)
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int n = s.Nvars;
@@ -175,7 +180,9 @@ internal static partial class PolynomialMultiply
             bool swap = cb.Length < ca.Length;
             var oe = Pool.Rent<ulong>(estimate * N);
             acc = Pool.Rent<TAcc>(estimate);
-            if (N == 1)
+            if (square && N <= 2)
+                count = SquareHeap<TOps, TC, TAcc>(ra, ca, N, ref oe, ref acc);
+            else if (N == 1)
                 count = swap ? MultiplyHeap1<TOps, TC, TAcc>(rb, cb, ra, ca, ref oe, ref acc)
                              : MultiplyHeap1<TOps, TC, TAcc>(ra, ca, rb, cb, ref oe, ref acc);
             else if (N == 2)

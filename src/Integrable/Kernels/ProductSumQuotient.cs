@@ -94,12 +94,29 @@ internal static class ProductSumQuotient
         long[]? c1 = null, c2 = null, cs = null;
         try
         {
-            pa = Pack(layout, ea, n, offA, ca.Length);
-            pb = Pack(layout, eb, n, s1.MinB, cb.Length);
-            pc = Pack(layout, ec, n, offC, cc.Length);
-            pd = Pack(layout, ed, n, s2.MinB, cd.Length);
-            int n1 = Product(pa, wa, pb, wb, W, out e1, out c1);
-            int n2 = Product(pc, wc, pd, wd, W, out e2, out c2);
+            int n1, n2;
+            if (ReferenceEquals(ea, eb) && W <= 2)
+            {
+                pa = Pack(layout, ea, n, s1.MinA, ca.Length);
+                n1 = Square(layout, pa, wa, s1.MinA, lo, out e1, out c1);
+            }
+            else
+            {
+                pa = Pack(layout, ea, n, offA, ca.Length);
+                pb = Pack(layout, eb, n, s1.MinB, cb.Length);
+                n1 = Product(pa, wa, pb, wb, W, out e1, out c1);
+            }
+            if (ReferenceEquals(ec, ed) && W <= 2)
+            {
+                pc = Pack(layout, ec, n, s2.MinA, cc.Length);
+                n2 = Square(layout, pc, wc, s2.MinA, lo, out e2, out c2);
+            }
+            else
+            {
+                pc = Pack(layout, ec, n, offC, cc.Length);
+                pd = Pack(layout, ed, n, s2.MinB, cd.Length);
+                n2 = Product(pc, wc, pd, wd, W, out e2, out c2);
+            }
             int ns = Merge(e1, c1, n1, e2, c2, n2, W, out es, out cs, out long maxS);
             Answered++;
             if (ns == 0) { coeffs = []; exps = []; return FusedStatus.Exact; }
@@ -197,6 +214,24 @@ internal static class ProductSumQuotient
                         : PolynomialMultiply.MultiplyHeap1<Word64Ops, long, long>(ra, wa, rb, wb, ref oe, ref oc);
         return swap ? PolynomialMultiply.MultiplyHeapN<Word64Ops, long, long>(rb, wb, ra, wa, words, ref oe, ref oc)
                     : PolynomialMultiply.MultiplyHeapN<Word64Ops, long, long>(ra, wa, rb, wb, words, ref oe, ref oc);
+    }
+
+    /// <summary>A·A by the heap on the triangle (<see cref="PolynomialMultiply.SquareHeap"/>), A packed with
+    /// offset min A; the packed exponents of the square, 2a − 2 min A, are then moved to the frame of the
+    /// sum by adding 2 min A − lo to every term (fields stay within the layout: 2a − lo ≤ M − m).</summary>
+    private static int Square(ExponentLayout layout, ulong[] pa, long[] wa, int[] minA, long[] lo, out ulong[] oe, out long[] oc)
+    {
+        int na = wa.Length, W = layout.Words, nv = minA.Length;
+        oe = Pool.Rent<ulong>(na * 2 * W);
+        oc = Pool.Rent<long>(na * 2);
+        int count = PolynomialMultiply.SquareHeap<Word64Ops, long, long>(pa.AsSpan(0, na * W), wa, W, ref oe, ref oc);
+        var shift = new int[nv];
+        for (int v = 0; v < nv; v++) shift[v] = checked((int)(2L * minA[v] - lo[v]));
+        var delta = new ulong[W];
+        layout.Pack(shift, nv, new int[nv], delta);
+        for (int t = 0; t < count; t++)
+            for (int w = 0; w < W; w++) oe[t * W + w] += delta[w];
+        return count;
     }
 
     /// <summary>Merges two packed descending term lists, adding coefficients of equal exponents and

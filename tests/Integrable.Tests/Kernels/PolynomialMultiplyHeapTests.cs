@@ -150,6 +150,33 @@ public sealed class PolynomialMultiplyHeapTests
         Assert.True(wide > 0);
     }
 
+    [Theory]
+    [MemberData(nameof(Layouts))]
+    public void Square_SameOperand_TriangleHeapMatchesNaiveAndProduct(string layoutName)
+    {
+        // p * p with the same arrays takes the triangle heap (diagonal once, off-diagonal twice); a copy of p
+        // (other arrays) takes the ordinary product. Both equal the naive square (common practice: differential test).
+        var layout = Enum.Parse<Layout>(layoutName);
+        var ring = Ring(layout);
+        var small = new LaurentPolynomialRing("s", "t", "u");
+        var rng = new Random(layout == Layout.ManyVariables ? 4111 : 4112);
+        foreach (var kind in Enum.GetValues<Coefficients>())
+            for (int i = 0; i < 8; i++)
+            {
+                var a = RandomPolynomial(rng, ring, layout, kind, 40);
+                var copy = ring.CreateBuilder();
+                foreach (var t in a.Terms) copy.Add(t.Coefficient, t.Exponents.ToArray());
+                var b = copy.ToPolynomial();
+                Assert.False(ReferenceEquals(a, b));
+                var expected = NaiveProduct(a, a);
+                AssertSame(expected, HeapProduct(a, a), $"square {layout} {kind} #{i}");
+                AssertSame(expected, HeapProduct(a, b), $"product {layout} {kind} #{i}");
+                // one-word layout: three variables of small degree
+                var c = RandomPolynomial(rng, small, Layout.ManyVariables, kind, 40);
+                AssertSame(NaiveProduct(c, c), HeapProduct(c, c), $"square one-word {kind} #{i}");
+            }
+    }
+
     [Fact]
     public void Multiply_TwoWordTelescopingProduct_CancelsToTwoTerms()
     {

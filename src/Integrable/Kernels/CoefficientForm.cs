@@ -47,6 +47,15 @@ internal static class CoefficientForm
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryWide(ReadOnlySpan<Rational> c, out Int128[] wide, out BigInteger denominator)
     {
+        // Fast path: word numerators over a word common denominator (the same least common multiple
+        // and scaled numerators as the big-integer route, so the result is identical).
+        if (TryWords(c, out var words, out long den))
+        {
+            wide = new Int128[words.Length];
+            for (int i = 0; i < words.Length; i++) wide[i] = words[i];
+            denominator = den;
+            return true;
+        }
         ToBig(c, out var ints, out denominator);
         wide = new Int128[c.Length];
         var limit = BigInteger.One << 126;

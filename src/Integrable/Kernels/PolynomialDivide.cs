@@ -32,6 +32,9 @@ internal enum DivideStatus
 /// polynomial by a primitive one, when it exists, has integer coefficients). Any failure proves that
 /// the divisor does not divide. On success the remainder is zero by construction, so the quotient is
 /// verified exactly.</para>
+/// <para>When the quotient is much larger than the divisor (#d² ≤ #p), <see cref="DivideHeap1"/> and
+/// <see cref="DivideHeapN"/> hand over to the divisor heap of the same paper (one entry per divisor
+/// term; PolynomialDivide.DivisorHeap.cs), whose heap stays small and cache-resident.</para>
 /// </remarks>
 internal static partial class PolynomialDivide
 {
@@ -43,6 +46,8 @@ internal static partial class PolynomialDivide
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int np = ep.Length, nd = ed.Length;
+        if (UseDivisorHeap(np, nd))
+            return DivideDivisorHeap1<TOps, TC, TAcc>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount);
         double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap];
@@ -169,6 +174,8 @@ internal static partial class PolynomialDivide
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int N = words, np = cp.Length, nd = cd.Length;
+        if (UseDivisorHeap(np, nd))
+            return DivideDivisorHeapN<TOps, TC, TAcc>(ep, cp, ed, cd, words, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount);
         double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap * N];

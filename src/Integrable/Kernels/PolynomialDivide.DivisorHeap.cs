@@ -1,0 +1,248 @@
+using System.Runtime.CompilerServices;
+
+namespace Integrable.Kernels;
+
+/// <summary>The divisor-heap variant of heap division (Monagan and Pearce, "Sparse polynomial division
+/// using a heap", J. Symbolic Comput. 46, 2011, section 3).</summary>
+/// <remarks>
+/// <para>The remainder is p − Σ_j d_j·q, read as #d − 1 sorted streams, one per divisor term j ≥ 1:
+/// d_j·q_0, d_j·q_1, … (the stream of d_0 cancels the leading terms by construction). The heap holds
+/// row j while its next quotient index i_j is below the number of quotient terms found so far; a row
+/// that has caught up (i_j equal to that number) waits in a list, and when quotient term k is produced
+/// every waiting row (all have i_j = k) is inserted with exponent q_k + d_j, which is smaller than the
+/// current exponent q_k + d_0, so no product is met out of order. The heap never exceeds #d − 1 entries,
+/// against #q for the quotient heap: the better choice when the quotient is much larger than the
+/// divisor. Equal exponents are chained as in the quotient heap; divisibility, quotient box, exactness
+/// and bound tests are the same.</para>
+/// </remarks>
+internal static partial class PolynomialDivide
+{
+    /// <summary>Forces the divisor heap (true) or the quotient heap (false) in
+    /// <see cref="DivideHeap1"/> and <see cref="DivideHeapN"/> on the current thread (tests and
+    /// benchmarks); null dispatches with <see cref="UseDivisorHeap"/>.</summary>
+    [ThreadStatic] internal static bool? ForceDivisorHeap;
+
+    /// <summary>The divisor heap is chosen when #d² ≤ #p: then #q ≥ #p/#d ≥ #d, so its heap is no
+    /// larger than the quotient heap.</summary>
+    internal static bool UseDivisorHeap(int np, int nd) => ForceDivisorHeap ?? (long)nd * nd <= np;
+
+    /// <summary>Single-word exact division with one heap entry per divisor term (same contract as
+    /// <see cref="DivideHeap1"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static DivideStatus DivideDivisorHeap1<TOps, TC, TAcc>(
+        ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd,
+        ulong guard, ulong qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        int np = ep.Length, nd = ed.Length;
+        double qSum = 0;
+        int cap = Math.Max(16, Math.Min(np, 1 << 16));
+        qe = new ulong[cap];
+        qc = new TC[cap];
+        qCount = 0;
+        var hexp = new ulong[nd + 1];
+        var hhead = new int[nd + 1];
+        var qi = new int[nd];      // row j: index of its next quotient term
+        var next = new int[nd];
+        var store = new int[nd];
+        var waiting = new int[nd];
+        int nw = 0;
+        for (int j = nd - 1; j >= 1; j--) waiting[nw++] = j;   // every row waits for q_0; row 1 pops first
+        int hlen = 1, pi = 0;
+        ulong d0 = ed[0];
+        TC lc = cd[0];
+
+        int polls = 0;
+        while (hlen > 1 || pi < np)
+        {
+            if ((++polls & 1023) == 0) KernelCancellation.Poll();
+            ulong exp;
+            if (hlen == 1) exp = ep[pi];
+            else if (pi < np && ep[pi] > hexp[1]) exp = ep[pi];
+            else exp = hexp[1];
+
+            TAcc acc;
+            if (pi < np && ep[pi] == exp) { acc = cp[pi]; pi++; }
+            else TOps.Set(out acc, default!);
+
+            int sp = 0;
+            while (hlen > 1 && hexp[1] == exp)
+            {
+                int r = hhead[1];
+                hlen--;
+                if (hlen > 1)
+                {
+                    ulong le = hexp[hlen]; int lh = hhead[hlen];
+                    int hole = 1, c = 2;
+                    while (c < hlen)
+                    {
+                        if (c + 1 < hlen && hexp[c + 1] > hexp[c]) c++;
+                        if (hexp[c] <= le) break;
+                        hexp[hole] = hexp[c]; hhead[hole] = hhead[c];
+                        hole = c; c = 2 * c;
+                    }
+                    hexp[hole] = le; hhead[hole] = lh;
+                }
+                for (; r >= 0; r = next[r])
+                {
+                    TOps.MulSub(ref acc, qc[qi[r]], cd[r]);
+                    store[sp++] = r;
+                }
+            }
+            while (sp > 0)
+            {
+                int j = store[--sp];
+                int i = qi[j] + 1;
+                qi[j] = i;
+                if (i < qCount) Insert(hexp, hhead, next, ref hlen, j, qe[i] + ed[j]);
+                else waiting[nw++] = j;
+            }
+
+            if (TOps.IsZero(in acc)) continue;
+
+            // New quotient term: exp / d0 must be a monomial inside the quotient's box.
+            ulong t = exp - d0;
+            if ((t & guard) != 0 || exp < d0 || ((qMax - t) & guard) != 0 || t > qMax) return DivideStatus.NotDivisible;
+            int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
+            if (st == 1) return DivideStatus.NotDivisible;
+            qSum += magnitude(q);
+            if (st == 2) return DivideStatus.QuotientTooLarge;
+            if (qSum > qSumLimit) return DivideStatus.TooLarge;
+            if (qCount == qe.Length)
+            {
+                int size = qe.Length * 2;
+                Array.Resize(ref qe, size);
+                Array.Resize(ref qc, size);
+            }
+            int row = qCount++;
+            qe[row] = t;
+            qc[row] = q;
+            // Every waiting row has caught up with the new term: its stream resumes at d_j·q_row.
+            while (nw > 0)
+            {
+                int j = waiting[--nw];
+                Insert(hexp, hhead, next, ref hlen, j, t + ed[j]);
+            }
+        }
+        return DivideStatus.Exact;
+    }
+
+    /// <summary>Multi-word exact division with one heap entry per divisor term (same contract as
+    /// <see cref="DivideHeapN"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static DivideStatus DivideDivisorHeapN<TOps, TC, TAcc>(
+        ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd, int words,
+        ReadOnlySpan<ulong> guard, ReadOnlySpan<ulong> qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        int N = words, np = cp.Length, nd = cd.Length;
+        double qSum = 0;
+        int cap = Math.Max(16, Math.Min(np, 1 << 16));
+        qe = new ulong[cap * N];
+        qc = new TC[cap];
+        qCount = 0;
+        var rowExp = new ulong[nd * N];
+        var hhead = new int[nd + 1];
+        var qi = new int[nd];
+        var next = new int[nd];
+        var store = new int[nd];
+        var waiting = new int[nd];
+        int nw = 0;
+        for (int j = nd - 1; j >= 1; j--) waiting[nw++] = j;
+        var exp = new ulong[N];
+        var t = new ulong[N];
+        int hlen = 1, pi = 0;
+        TC lc = cd[0];
+
+        int polls = 0;
+        while (hlen > 1 || pi < np)
+        {
+            if ((++polls & 1023) == 0) KernelCancellation.Poll();
+            if (hlen == 1) ep.Slice(pi * N, N).CopyTo(exp);
+            else
+            {
+                var top = rowExp.AsSpan(hhead[1] * N, N);
+                if (pi < np && PolynomialMultiply.CompareN(ep.Slice(pi * N, N), top) > 0) ep.Slice(pi * N, N).CopyTo(exp);
+                else top.CopyTo(exp);
+            }
+
+            TAcc acc;
+            if (pi < np && ep.Slice(pi * N, N).SequenceEqual(exp)) { acc = cp[pi]; pi++; }
+            else TOps.Set(out acc, default!);
+
+            int sp = 0;
+            while (hlen > 1 && rowExp.AsSpan(hhead[1] * N, N).SequenceEqual(exp))
+            {
+                int r = hhead[1];
+                hlen--;
+                if (hlen > 1)
+                {
+                    int lh = hhead[hlen];
+                    var le = rowExp.AsSpan(lh * N, N);
+                    int hole = 1, c = 2;
+                    while (c < hlen)
+                    {
+                        if (c + 1 < hlen && PolynomialMultiply.CompareN(rowExp.AsSpan(hhead[c + 1] * N, N), rowExp.AsSpan(hhead[c] * N, N)) > 0) c++;
+                        if (PolynomialMultiply.CompareN(rowExp.AsSpan(hhead[c] * N, N), le) <= 0) break;
+                        hhead[hole] = hhead[c];
+                        hole = c; c = 2 * c;
+                    }
+                    hhead[hole] = lh;
+                }
+                for (; r >= 0; r = next[r])
+                {
+                    TOps.MulSub(ref acc, qc[qi[r]], cd[r]);
+                    store[sp++] = r;
+                }
+            }
+            while (sp > 0)
+            {
+                int j = store[--sp];
+                int i = qi[j] + 1;
+                qi[j] = i;
+                if (i < qCount)
+                {
+                    var re = rowExp.AsSpan(j * N, N);
+                    var q = qe.AsSpan(i * N, N);
+                    var dj = ed.Slice(j * N, N);
+                    for (int w = 0; w < N; w++) re[w] = q[w] + dj[w];
+                    InsertN(rowExp, N, hhead, next, ref hlen, j);
+                }
+                else waiting[nw++] = j;
+            }
+
+            if (TOps.IsZero(in acc)) continue;
+
+            for (int w = 0; w < N; w++)
+            {
+                ulong x = exp[w], d = ed[w];
+                t[w] = x - d;
+                if (((x - d) & guard[w]) != 0 || x < d || ((qMax[w] - t[w]) & guard[w]) != 0 || t[w] > qMax[w])
+                    return DivideStatus.NotDivisible;
+            }
+            int st = TOps.TryDivideExact(in acc, lc, limit, out TC qcoef);
+            if (st == 1) return DivideStatus.NotDivisible;
+            qSum += magnitude(qcoef);
+            if (st == 2) return DivideStatus.QuotientTooLarge;
+            if (qSum > qSumLimit) return DivideStatus.TooLarge;
+            if (qCount == qc.Length)
+            {
+                int size = qc.Length * 2;
+                Array.Resize(ref qe, size * N);
+                Array.Resize(ref qc, size);
+            }
+            int row = qCount++;
+            t.CopyTo(qe.AsSpan(row * N, N));
+            qc[row] = qcoef;
+            while (nw > 0)
+            {
+                int j = waiting[--nw];
+                var re = rowExp.AsSpan(j * N, N);
+                var dj = ed.Slice(j * N, N);
+                for (int w = 0; w < N; w++) re[w] = t[w] + dj[w];
+                InsertN(rowExp, N, hhead, next, ref hlen, j);
+            }
+        }
+        return DivideStatus.Exact;
+    }
+}

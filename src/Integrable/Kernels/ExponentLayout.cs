@@ -72,16 +72,36 @@ internal sealed class ExponentLayout
     public void Pack(ReadOnlySpan<int> exps, int nvars, ReadOnlySpan<int> offset, Span<ulong> packed)
     {
         int terms = exps.Length / nvars;
+        // Only the fields that take bits (variables of zero range are skipped once, not per term).
+        int active = 0;
+        for (int v = 0; v < nvars; v++) if (Bits[v] > 0) active++;
+        var vars = new int[active];
+        var shifts = new int[active];
+        var words = new int[active];
+        var offsets = new long[active];
+        for (int v = 0, k = 0; v < nvars; v++)
+        {
+            if (Bits[v] == 0) continue;
+            vars[k] = v; shifts[k] = Shift[v]; words[k] = Word[v]; offsets[k] = offset[v];
+            k++;
+        }
+        if (Words == 1)
+        {
+            for (int t = 0; t < terms; t++)
+            {
+                var e = exps.Slice(t * nvars, nvars);
+                ulong x = 0;
+                for (int k = 0; k < vars.Length; k++) x |= (ulong)(e[vars[k]] - offsets[k]) << shifts[k];
+                packed[t] = x;
+            }
+            return;
+        }
         packed[..(terms * Words)].Clear();
         for (int t = 0; t < terms; t++)
         {
             var e = exps.Slice(t * nvars, nvars);
             var p = packed.Slice(t * Words, Words);
-            for (int v = 0; v < nvars; v++)
-            {
-                if (Bits[v] == 0) continue;
-                p[Word[v]] |= (ulong)((long)e[v] - offset[v]) << Shift[v];
-            }
+            for (int k = 0; k < vars.Length; k++) p[words[k]] |= (ulong)(e[vars[k]] - offsets[k]) << shifts[k];
         }
     }
 

@@ -510,8 +510,9 @@ internal static partial class PolynomialDivide
                 var maxValue = new long[_n];
                 for (int v = 0; v < _n; v++) maxValue[v] = _radix[v] - 1;
                 _layout = ExponentLayout.Create(maxValue, guard: true);
-                _pa = new ulong[p.Length * _layout.Words];
-                _pb = new ulong[d.Length * _layout.Words];
+                // Pack writes every word, so the (large) buffers need no zeroing.
+                _pa = GC.AllocateUninitializedArray<ulong>(p.Length * _layout.Words);
+                _pb = GC.AllocateUninitializedArray<ulong>(d.Length * _layout.Words);
                 _layout.Pack(_ea, _n, _minA, _pa);
                 _layout.Pack(_eb, _n, _minB, _pb);
                 var tmp = new int[_n];

@@ -10,7 +10,8 @@ namespace Integrable.Benchmarks;
 /// (|a| ≤ N−2) and T_{a,1} (|a| ≤ N−1), through <see cref="TSystem.EvaluateReduced{T}"/> over
 /// <see cref="LaurentPolynomialRing"/>. Usage: <c>-- W4 N</c> prints <c>n=N terms=&lt;terms of T_{0,N}&gt;
 /// seconds=&lt;wall time for T_{0,N} from scratch&gt; cpu=&lt;process CPU time&gt; coeffsum=&lt;value at all ones&gt;</c>;
-/// <c>-- W4 N breakdown</c> runs layer by layer and times products, sums and divisions separately.</summary>
+/// <c>-- W4 N breakdown</c> runs layer by layer and times products, sums and divisions separately
+/// (<c>-- W4 N breakdown quotient-heap</c> or <c>divisor-heap</c> pins the heap division variant).</summary>
 public sealed class W4Workload : IWorkload
 {
     /// <inheritdoc/>
@@ -21,7 +22,17 @@ public sealed class W4Workload : IWorkload
     {
         int n = args.Length > 0 ? int.Parse(args[0], CultureInfo.InvariantCulture) : 5;
         if (n < 2) throw new ArgumentOutOfRangeException(nameof(args), n, "N must be at least 2");
-        if (args.Length > 1 && args[1] == "breakdown") return Breakdown(n);
+        if (args.Length > 1 && args[1] == "breakdown")
+        {
+            // Optional third argument pins the heap division variant: "quotient-heap" or "divisor-heap".
+            if (args.Length > 2) Integrable.Kernels.PolynomialDivide.ForceDivisorHeap = args[2] switch
+            {
+                "quotient-heap" => false,
+                "divisor-heap" => true,
+                _ => throw new ArgumentException($"unknown division variant '{args[2]}' (quotient-heap or divisor-heap)", nameof(args)),
+            };
+            return Breakdown(n);
+        }
         Compute(Math.Min(n, 4));   // warm-up (JIT), not timed
         var (value, seconds, cpu) = Compute(n);
         return $"n={n} terms={value.TermCount} seconds={seconds.ToString("0.0000", CultureInfo.InvariantCulture)} cpu={cpu.ToString("0.0000", CultureInfo.InvariantCulture)} coeffsum={W2Workload.CoefficientSum(value)}";
@@ -36,7 +47,7 @@ public sealed class W4Workload : IWorkload
     }
 
     /// <summary>Layer by layer as the reference program, with the squares and products, the sums and the exact
-    /// divisions timed separately (<c>-- W4 N breakdown</c>).</summary>
+    /// divisions timed separately (<c>-- W4 N breakdown</c>; divideCpu is the process CPU time of the divisions).</summary>
     private static string Breakdown(int n)
     {
         var ring = Ring(n);
@@ -44,7 +55,7 @@ public sealed class W4Workload : IWorkload
         var cur = new LaurentPolynomial[2 * n + 1];
         for (int a = -(n - 2); a <= n - 2; a++) prev[a + n] = ring.Variable(a + n - 2);
         for (int a = -(n - 1); a <= n - 1; a++) cur[a + n] = ring.Variable(2 * n - 3 + a + n - 1);
-        double mul = 0, add = 0, div = 0;
+        double mul = 0, add = 0, div = 0, divCpu = 0;
         for (int m = 1; m < n; m++)
         {
             var next = new LaurentPolynomial[2 * n + 1];
@@ -56,8 +67,10 @@ public sealed class W4Workload : IWorkload
                 long t1 = Stopwatch.GetTimestamp();
                 var num = p1 + p2;
                 long t2 = Stopwatch.GetTimestamp();
+                double c2 = W2Workload.ProcessCpu();
                 if (!num.TryDivideExact(prev[a + n], out var q)) throw new InvalidOperationException("division is not exact");
                 long t3 = Stopwatch.GetTimestamp();
+                divCpu += W2Workload.ProcessCpu() - c2;
                 mul += Stopwatch.GetElapsedTime(t0, t1).TotalSeconds;
                 add += Stopwatch.GetElapsedTime(t1, t2).TotalSeconds;
                 div += Stopwatch.GetElapsedTime(t2, t3).TotalSeconds;
@@ -67,7 +80,7 @@ public sealed class W4Workload : IWorkload
             cur = next;
         }
         string F(double v) => v.ToString("0.0000", CultureInfo.InvariantCulture);
-        return $"n={n} terms={cur[n].TermCount} multiply={F(mul)} add={F(add)} divide={F(div)} total={F(mul + add + div)}";
+        return $"n={n} terms={cur[n].TermCount} multiply={F(mul)} add={F(add)} divide={F(div)} total={F(mul + add + div)} divideCpu={F(divCpu)}";
     }
 
     private static (LaurentPolynomial Value, double Seconds, double Cpu) Compute(int n)

@@ -42,19 +42,32 @@ internal static class CoefficientForm
         return true;
     }
 
-    /// <summary>Writes c_i = wide_i / denominator with every |wide_i| &lt; 2^126 (the dividend form of
-    /// exact division). Fails when some value does not fit.</summary>
+    /// <summary>Writes c_i = x_i / denominator with every |x_i| &lt; 2^126 (the dividend form of exact
+    /// division): in <paramref name="words"/> when every value and the denominator fit in a word
+    /// (<see cref="TryWords"/>, no big integers; <paramref name="wide"/> is then null and the caller widens
+    /// only if it needs 128 bits), else in <paramref name="wide"/> through big integers
+    /// (<paramref name="words"/> null). Both routes give the same least common denominator and the same
+    /// scaled numerators. Fails when some value does not fit in 126 bits.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static bool TryWide(ReadOnlySpan<Rational> c, out Int128[] wide, out BigInteger denominator)
+    public static bool TryWide(ReadOnlySpan<Rational> c, out long[]? words, out Int128[]? wide, out BigInteger denominator)
     {
+        wide = null;
+        if (TryWords(c, out var w, out long den))
+        {
+            words = w;
+            denominator = den;
+            return true;
+        }
+        words = null;
         ToBig(c, out var ints, out denominator);
-        wide = new Int128[c.Length];
+        var x = new Int128[c.Length];
         var limit = BigInteger.One << 126;
         for (int i = 0; i < ints.Length; i++)
         {
             if (BigInteger.Abs(ints[i]) >= limit) return false;
-            wide[i] = (Int128)ints[i];
+            x[i] = (Int128)ints[i];
         }
+        wide = x;
         return true;
     }
 

@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 using System.Numerics;
 
 namespace Integrable.Kernels;
@@ -72,15 +73,38 @@ internal sealed class ExponentLayout
     public void Pack(ReadOnlySpan<int> exps, int nvars, ReadOnlySpan<int> offset, Span<ulong> packed)
     {
         int terms = exps.Length / nvars;
-        packed[..(terms * Words)].Clear();
+        if (packed.Length < terms * Words) throw new ArgumentException("Packed buffer too short.", nameof(packed));
+        // Only the fields that take bits, grouped by word (fields follow the variable order, so the
+        // fields of word w are the contiguous range start[w] .. start[w + 1] − 1).
+        int active = 0;
+        for (int v = 0; v < nvars; v++) if (Bits[v] > 0) active++;
+        var vars = new int[active + 1];
+        var shifts = new int[active + 1];
+        var offsets = new long[active + 1];
+        var start = new int[Words + 1];
+        for (int v = 0, k = 0; v < nvars; v++)
+        {
+            if (Bits[v] == 0) continue;
+            vars[k] = v; shifts[k] = Shift[v]; offsets[k] = offset[v];
+            k++;
+            start[Word[v] + 1] = k;
+        }
+        for (int w = 1; w <= Words; w++) start[w] = Math.Max(start[w], start[w - 1]);
+        ref int e0 = ref MemoryMarshal.GetReference(exps);
+        ref ulong p0 = ref MemoryMarshal.GetReference(packed);
+        ref int vr = ref vars[0];
+        ref int sr = ref shifts[0];
+        ref long offr = ref offsets[0];
         for (int t = 0; t < terms; t++)
         {
-            var e = exps.Slice(t * nvars, nvars);
-            var p = packed.Slice(t * Words, Words);
-            for (int v = 0; v < nvars; v++)
+            ref int e = ref Unsafe.Add(ref e0, (nint)t * nvars);
+            ref ulong p = ref Unsafe.Add(ref p0, (nint)t * Words);
+            for (int w = 0; w < Words; w++)
             {
-                if (Bits[v] == 0) continue;
-                p[Word[v]] |= (ulong)((long)e[v] - offset[v]) << Shift[v];
+                ulong x = 0;
+                for (int k = start[w]; k < start[w + 1]; k++)
+                    x |= (ulong)(Unsafe.Add(ref e, Unsafe.Add(ref vr, k)) - Unsafe.Add(ref offr, k)) << Unsafe.Add(ref sr, k);
+                Unsafe.Add(ref p, w) = x;
             }
         }
     }

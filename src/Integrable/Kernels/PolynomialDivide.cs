@@ -32,6 +32,9 @@ internal enum DivideStatus
 /// polynomial by a primitive one, when it exists, has integer coefficients). Any failure proves that
 /// the divisor does not divide. On success the remainder is zero by construction, so the quotient is
 /// verified exactly.</para>
+/// <para>When the quotient is much larger than the divisor (#d² ≤ #p), <see cref="DivideHeap1"/> and
+/// <see cref="DivideHeapN"/> hand over to the divisor heap of the same paper (one entry per divisor
+/// term; PolynomialDivide.DivisorHeap.cs), whose heap stays small and cache-resident.</para>
 /// </remarks>
 internal static partial class PolynomialDivide
 {
@@ -43,6 +46,8 @@ internal static partial class PolynomialDivide
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int np = ep.Length, nd = ed.Length;
+        if (UseDivisorHeap(np, nd))
+            return DivideDivisorHeap1<TOps, TC, TAcc>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount);
         double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap];
@@ -169,6 +174,10 @@ internal static partial class PolynomialDivide
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int N = words, np = cp.Length, nd = cd.Length;
+        if (UseDivisorHeap(np, nd))
+            return words == 2
+                ? DivideDivisorHeap2<TOps, TC, TAcc>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount)
+                : DivideDivisorHeapN<TOps, TC, TAcc>(ep, cp, ed, cd, words, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount);
         double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap * N];
@@ -349,8 +358,10 @@ internal static partial class PolynomialDivide
             return false;
 
         var ctx = new DivisionInput(ca, ea, cb, eb, n, minA, minB, qRange, offset, radix, box);
-        if (CoefficientForm.TryWords(cb, out var wb, out long db) && CoefficientForm.TryWide(ca, out var pw, out var dp))
+        // The dividend stays in words when it fits (widened to 128 bits only if a wider accumulator runs).
+        if (CoefficientForm.TryWords(cb, out var wb, out long db) && CoefficientForm.TryWide(ca, out var pWords, out var pw, out var dp))
         {
+            Int128[] Wide() => pw ??= Array.ConvertAll(pWords!, static x => (Int128)x);
             // B = c·B''/db with B'' primitive; A = A'/dp; A/B = db/(dp·c) · A'/B''.
             ulong g = 0;
             foreach (var x in wb) g = IntegerMath.Gcd(g, IntegerMath.UnsignedAbs(x));
@@ -358,7 +369,8 @@ internal static partial class PolynomialDivide
             if (c != 1) for (int i = 0; i < wb.Length; i++) wb[i] /= c;
             var scale = new Rational(db) / (new Rational(dp) * new Rational(c));
             double maxP = 0, maxD = 0, l1P = 0, l1D = 0;
-            foreach (var x in pw) { double m = Math.Abs((double)x); maxP = Math.Max(maxP, m); l1P += m; }
+            if (pWords is not null) foreach (var x in pWords) { double m = Math.Abs((double)x); maxP = Math.Max(maxP, m); l1P += m; }
+            else foreach (var x in pw!) { double m = Math.Abs((double)x); maxP = Math.Max(maxP, m); l1P += m; }
             foreach (var x in wb) { double m = Math.Abs((double)x); maxD = Math.Max(maxD, m); l1D += m; }
             // ‖Q‖₁ ≥ ‖P‖₁/‖D‖₁, so an accumulator whose Σ|q| limit is below that cannot succeed.
             double qL1Lower = l1P / l1D * 0.99;
@@ -369,22 +381,27 @@ internal static partial class PolynomialDivide
             long[]? qw = null;
             if (maxP < Math.ScaleB(1.0, 62) && qL1Lower <= Limit(62))
             {
-                var p64 = new long[pw.Length];
-                for (int i = 0; i < pw.Length; i++) p64[i] = (long)pw[i];
+                var p64 = pWords;
+                if (p64 is null)
+                {
+                    p64 = new long[pw!.Length];
+                    for (int i = 0; i < pw.Length; i++) p64[i] = (long)pw[i];
+                }
                 status = ctx.Run<Word64Ops, long, long>(p64, wb, long.MaxValue, Limit(62), mag, out qw, out var qe64);
                 if (status == DivideStatus.Exact) return ctx.Finish(qw!, qe64, scale, out coeffs, out exps);
             }
             if (status == DivideStatus.TooLarge && qL1Lower <= Limit(126))
             {
-                status = ctx.Run<Word128Ops, long, Int128>(pw, wb, long.MaxValue, Limit(126), mag, out qw, out var qe128);
+                status = ctx.Run<Word128Ops, long, Int128>(Wide(), wb, long.MaxValue, Limit(126), mag, out qw, out var qe128);
                 if (status == DivideStatus.Exact) return ctx.Finish(qw!, qe128, scale, out coeffs, out exps);
             }
             if (status == DivideStatus.TooLarge)
             {
-                var p192 = new Int192[pw.Length];
-                for (int i = 0; i < pw.Length; i++)
+                var p128 = Wide();
+                var p192 = new Int192[p128.Length];
+                for (int i = 0; i < p128.Length; i++)
                 {
-                    Int128 x = pw[i];
+                    Int128 x = p128[i];
                     p192[i].Lo = (ulong)x;
                     p192[i].Mid = (ulong)(x >> 64);
                     p192[i].Hi = x < 0 ? -1 : 0;
@@ -493,8 +510,9 @@ internal static partial class PolynomialDivide
                 var maxValue = new long[_n];
                 for (int v = 0; v < _n; v++) maxValue[v] = _radix[v] - 1;
                 _layout = ExponentLayout.Create(maxValue, guard: true);
-                _pa = new ulong[p.Length * _layout.Words];
-                _pb = new ulong[d.Length * _layout.Words];
+                // Pack writes every word, so the (large) buffers need no zeroing.
+                _pa = GC.AllocateUninitializedArray<ulong>(p.Length * _layout.Words);
+                _pb = GC.AllocateUninitializedArray<ulong>(d.Length * _layout.Words);
                 _layout.Pack(_ea, _n, _minA, _pa);
                 _layout.Pack(_eb, _n, _minB, _pb);
                 var tmp = new int[_n];

@@ -33,7 +33,7 @@ internal static partial class PolynomialDivide
         ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd,
         ulong guard, ulong qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
         where TOps : ICoefficientOps<TC, TAcc> =>
-        DivideDivisorHeap<TOps, TC, TAcc, OneWordKey, ulong>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount);
+        DivideDivisorHeap<TOps, TC, TAcc, Key1>(ep, cp, ed, cd, new Key1(guard), new Key1(qMax), limit, qSumLimit, magnitude, out qe, out qc, out qCount);
 
     /// <summary>Two-word exact division with one heap entry per divisor term, the exponents compared
     /// and added as 128-bit integers (same contract as <see cref="DivideHeapN"/> with two words).</summary>
@@ -41,79 +41,25 @@ internal static partial class PolynomialDivide
         ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd,
         ReadOnlySpan<ulong> guard, ReadOnlySpan<ulong> qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
         where TOps : ICoefficientOps<TC, TAcc> =>
-        DivideDivisorHeap<TOps, TC, TAcc, TwoWordKey, UInt128>(ep, cp, ed, cd, new UInt128(guard[0], guard[1]), new UInt128(qMax[0], qMax[1]),
+        DivideDivisorHeap<TOps, TC, TAcc, Key2>(ep, cp, ed, cd, new Key2(guard[0], guard[1]), new Key2(qMax[0], qMax[1]),
             limit, qSumLimit, magnitude, out qe, out qc, out qCount);
 
-    /// <summary>Packed exponents of one or two words held as one unsigned integer: word 0 most
-    /// significant, so integer order is lex order; fields never overflow or straddle words, so integer
-    /// addition of two exponents adds the words independently.</summary>
-    private interface IPackedKey<TKey>
-    {
-        /// <summary>Words per exponent.</summary>
-        static abstract int Words { get; }
-
-        /// <summary>The exponent of term <paramref name="index"/>.</summary>
-        static abstract TKey Load(ReadOnlySpan<ulong> packed, int index);
-
-        /// <summary>Writes the exponent of term <paramref name="index"/>.</summary>
-        static abstract void Store(TKey key, Span<ulong> packed, int index);
-
-        /// <summary>t = exp − d0 word by word, when it is a monomial (no field borrows: guard bits clear)
-        /// inside the quotient's box [0, qMax]; false otherwise.</summary>
-        static abstract bool TryQuotientExponent(TKey exp, TKey d0, TKey guard, TKey qMax, out TKey t);
-    }
-
-    private struct OneWordKey : IPackedKey<ulong>
-    {
-        public static int Words => 1;
-        public static ulong Load(ReadOnlySpan<ulong> packed, int index) => packed[index];
-        public static void Store(ulong key, Span<ulong> packed, int index) => packed[index] = key;
-
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static bool TryQuotientExponent(ulong exp, ulong d0, ulong guard, ulong qMax, out ulong t)
-        {
-            t = exp - d0;
-            return (t & guard) == 0 && exp >= d0 && ((qMax - t) & guard) == 0 && t <= qMax;
-        }
-    }
-
-    private struct TwoWordKey : IPackedKey<UInt128>
-    {
-        public static int Words => 2;
-        public static UInt128 Load(ReadOnlySpan<ulong> packed, int index) => new(packed[2 * index], packed[2 * index + 1]);
-
-        public static void Store(UInt128 key, Span<ulong> packed, int index)
-        {
-            packed[2 * index] = (ulong)(key >> 64);
-            packed[2 * index + 1] = (ulong)key;
-        }
-
-        public static bool TryQuotientExponent(UInt128 exp, UInt128 d0, UInt128 guard, UInt128 qMax, out UInt128 t)
-        {
-            bool ok = OneWordKey.TryQuotientExponent((ulong)(exp >> 64), (ulong)(d0 >> 64), (ulong)(guard >> 64), (ulong)(qMax >> 64), out ulong hi)
-                & OneWordKey.TryQuotientExponent((ulong)exp, (ulong)d0, (ulong)guard, (ulong)qMax, out ulong lo);
-            t = new UInt128(hi, lo);
-            return ok;
-        }
-    }
-
-    /// <summary>The divisor heap on exponents packed in one integer key (see <see cref="IPackedKey{TKey}"/>).</summary>
+    /// <summary>The divisor heap on exponents held by value (see <see cref="IPackedKey{TSelf}"/>).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static DivideStatus DivideDivisorHeap<TOps, TC, TAcc, TK, TKey>(
+    private static DivideStatus DivideDivisorHeap<TOps, TC, TAcc, TKey>(
         ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd,
         TKey guard, TKey qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
         where TOps : ICoefficientOps<TC, TAcc>
-        where TK : IPackedKey<TKey>
-        where TKey : unmanaged, IComparisonOperators<TKey, TKey, bool>, IAdditionOperators<TKey, TKey, TKey>
+        where TKey : struct, IPackedKey<TKey>
     {
-        int W = TK.Words, np = cp.Length, nd = cd.Length;
+        int W = TKey.Words, np = cp.Length, nd = cd.Length;
         double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap * W];
         qc = new TC[cap];
         qCount = 0;
         var dk = new TKey[nd];
-        for (int j = 0; j < nd; j++) dk[j] = TK.Load(ed, j);
+        for (int j = 0; j < nd; j++) dk[j] = TKey.Load(ed, j);
         var hexp = new TKey[nd + 1];
         var hhead = new int[nd + 1];
         var qi = new int[nd];      // row j: index of its next quotient term
@@ -124,7 +70,7 @@ internal static partial class PolynomialDivide
         for (int j = nd - 1; j >= 1; j--) waiting[nw++] = j;   // every row waits for q_0; row 1 pops first
         int hlen = 1, pi = 0;
         TKey d0 = dk[0];
-        TKey pe = pi < np ? TK.Load(ep, 0) : default;
+        TKey pe = pi < np ? TKey.Load(ep, 0) : default;
         TC lc = cd[0];
 
         int polls = 0;
@@ -133,19 +79,19 @@ internal static partial class PolynomialDivide
             if ((++polls & 1023) == 0) KernelCancellation.Poll();
             TKey exp;
             if (hlen == 1) exp = pe;
-            else if (pi < np && pe > hexp[1]) exp = pe;
+            else if (pi < np && TKey.Greater(pe, hexp[1])) exp = pe;
             else exp = hexp[1];
 
             TAcc acc;
-            if (pi < np && pe == exp)
+            if (pi < np && TKey.Same(pe, exp))
             {
                 acc = cp[pi];
-                if (++pi < np) pe = TK.Load(ep, pi);
+                if (++pi < np) pe = TKey.Load(ep, pi);
             }
             else TOps.Set(out acc, default!);
 
             int sp = 0;
-            while (hlen > 1 && hexp[1] == exp)
+            while (hlen > 1 && TKey.Same(hexp[1], exp))
             {
                 int r = hhead[1];
                 hlen--;
@@ -155,8 +101,8 @@ internal static partial class PolynomialDivide
                     int hole = 1, c = 2;
                     while (c < hlen)
                     {
-                        if (c + 1 < hlen && hexp[c + 1] > hexp[c]) c++;
-                        if (hexp[c] <= le) break;
+                        if (c + 1 < hlen && TKey.Greater(hexp[c + 1], hexp[c])) c++;
+                        if (!TKey.Greater(hexp[c], le)) break;
                         hexp[hole] = hexp[c]; hhead[hole] = hhead[c];
                         hole = c; c = 2 * c;
                     }
@@ -173,14 +119,14 @@ internal static partial class PolynomialDivide
                 int j = store[--sp];
                 int i = qi[j] + 1;
                 qi[j] = i;
-                if (i < qCount) InsertKey(hexp, hhead, next, ref hlen, j, TK.Load(qe, i) + dk[j]);
+                if (i < qCount) InsertKey(hexp, hhead, next, ref hlen, j, TKey.Add(TKey.Load(qe, i), dk[j]));
                 else waiting[nw++] = j;
             }
 
             if (TOps.IsZero(in acc)) continue;
 
             // New quotient term: exp / d0 must be a monomial inside the quotient's box.
-            if (!TK.TryQuotientExponent(exp, d0, guard, qMax, out TKey t)) return DivideStatus.NotDivisible;
+            if (!TKey.TryQuotientExponent(exp, d0, guard, qMax, out TKey t)) return DivideStatus.NotDivisible;
             int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
             if (st == 1) return DivideStatus.NotDivisible;
             qSum += magnitude(q);
@@ -193,13 +139,13 @@ internal static partial class PolynomialDivide
                 Array.Resize(ref qc, size);
             }
             int row = qCount++;
-            TK.Store(t, qe, row);
+            TKey.Store(ref qe[row * W], t);
             qc[row] = q;
             // Every waiting row has caught up with the new term: its stream resumes at d_j·q_row.
             while (nw > 0)
             {
                 int j = waiting[--nw];
-                InsertKey(hexp, hhead, next, ref hlen, j, t + dk[j]);
+                InsertKey(hexp, hhead, next, ref hlen, j, TKey.Add(t, dk[j]));
             }
         }
         return DivideStatus.Exact;
@@ -209,15 +155,15 @@ internal static partial class PolynomialDivide
     /// equal exponent met on the way up.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void InsertKey<TKey>(TKey[] hexp, int[] hhead, int[] next, ref int hlen, int row, TKey e)
-        where TKey : unmanaged, IComparisonOperators<TKey, TKey, bool>
+        where TKey : struct, IPackedKey<TKey>
     {
         int pos = hlen, j = pos;
         while (j > 1)
         {
             int p = j >> 1;
             TKey pe = hexp[p];
-            if (pe == e) { next[row] = hhead[p]; hhead[p] = row; return; }
-            if (pe < e) j = p; else break;
+            if (TKey.Same(pe, e)) { next[row] = hhead[p]; hhead[p] = row; return; }
+            if (TKey.Greater(e, pe)) j = p; else break;
         }
         hlen++;
         int k = pos;

@@ -5,62 +5,6 @@ namespace Integrable.Kernels;
 
 internal static partial class PolynomialMultiply
 {
-    /// <summary>A packed exponent of a fixed number of words held by value in a heap entry, so that
-    /// comparisons and sums are inlined register operations (no indirection through a row buffer).</summary>
-    internal interface IPackedKey<TSelf> where TSelf : struct, IPackedKey<TSelf>
-    {
-        /// <summary>Words per term.</summary>
-        static abstract int Words { get; }
-
-        /// <summary>The sum of term <paramref name="i"/> of <paramref name="a"/> and term
-        /// <paramref name="j"/> of <paramref name="b"/> (fields never overflow, so word-wise addition).</summary>
-        static abstract TSelf Sum(ref ulong a, int i, ref ulong b, int j);
-
-        /// <summary>x &gt; y in the lexicographic order of the words (word 0 most significant).</summary>
-        static abstract bool Greater(TSelf x, TSelf y);
-
-        /// <summary>x = y.</summary>
-        static abstract bool Same(TSelf x, TSelf y);
-
-        /// <summary>Writes the words of <paramref name="x"/> at <paramref name="dst"/>.</summary>
-        static abstract void Store(ref ulong dst, TSelf x);
-    }
-
-    /// <summary>One packed word.</summary>
-    internal struct Key1 : IPackedKey<Key1>
-    {
-        public ulong W;
-        public static int Words => 1;
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static Key1 Sum(ref ulong a, int i, ref ulong b, int j) => new() { W = Unsafe.Add(ref a, i) + Unsafe.Add(ref b, j) };
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static bool Greater(Key1 x, Key1 y) => x.W > y.W;
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static bool Same(Key1 x, Key1 y) => x.W == y.W;
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static void Store(ref ulong dst, Key1 x) => dst = x.W;
-    }
-
-    /// <summary>Two packed words, compared high word first.</summary>
-    internal struct Key2 : IPackedKey<Key2>
-    {
-        public ulong Hi, Lo;
-        public static int Words => 2;
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static Key2 Sum(ref ulong a, int i, ref ulong b, int j)
-        {
-            ref ulong x = ref Unsafe.Add(ref a, 2 * i);
-            ref ulong y = ref Unsafe.Add(ref b, 2 * j);
-            return new() { Hi = x + y, Lo = Unsafe.Add(ref x, 1) + Unsafe.Add(ref y, 1) };
-        }
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static bool Greater(Key2 x, Key2 y) => x.Hi > y.Hi || (x.Hi == y.Hi && x.Lo > y.Lo);
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static bool Same(Key2 x, Key2 y) => x.Hi == y.Hi && x.Lo == y.Lo;
-        [MethodImpl(MethodImplOptions.AggressiveInlining)]
-        public static void Store(ref ulong dst, Key2 x) { dst = x.Hi; Unsafe.Add(ref dst, 1) = x.Lo; }
-    }
-
     /// <summary>One heap slot: a packed exponent and the head of the chain of rows sharing it.</summary>
     private struct HeapEntry<TKey> where TKey : struct
     {

@@ -35,13 +35,14 @@ internal static partial class PolynomialDivide
         where TOps : ICoefficientOps<TC, TAcc> =>
         DivideDivisorHeap<TOps, TC, TAcc, Key1>(ep, cp, ed, cd, new Key1(guard), new Key1(qMax), limit, qSumLimit, magnitude, out qe, out qc, out qCount);
 
-    /// <summary>Two-word exact division with one heap entry per divisor term, the exponents compared
-    /// and added as 128-bit integers (same contract as <see cref="DivideHeapN"/> with two words).</summary>
-    private static DivideStatus DivideDivisorHeap2<TOps, TC, TAcc>(
+    /// <summary>Exact division with one heap entry per divisor term and exponents of two to four words
+    /// held by value (same contract as <see cref="DivideHeapN"/>).</summary>
+    private static DivideStatus DivideDivisorHeapK<TOps, TC, TAcc, TKey>(
         ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ReadOnlySpan<ulong> ed, ReadOnlySpan<TC> cd,
         ReadOnlySpan<ulong> guard, ReadOnlySpan<ulong> qMax, TC limit, double qSumLimit, Func<TC, double> magnitude, out ulong[] qe, out TC[] qc, out int qCount)
-        where TOps : ICoefficientOps<TC, TAcc> =>
-        DivideDivisorHeap<TOps, TC, TAcc, Key2>(ep, cp, ed, cd, new Key2(guard[0], guard[1]), new Key2(qMax[0], qMax[1]),
+        where TOps : ICoefficientOps<TC, TAcc>
+        where TKey : struct, IPackedKey<TKey> =>
+        DivideDivisorHeap<TOps, TC, TAcc, TKey>(ep, cp, ed, cd, TKey.Load(guard, 0), TKey.Load(qMax, 0),
             limit, qSumLimit, magnitude, out qe, out qc, out qCount);
 
     /// <summary>The divisor heap on exponents held by value (see <see cref="IPackedKey{TSelf}"/>).</summary>

@@ -175,9 +175,13 @@ internal static partial class PolynomialDivide
     {
         int N = words, np = cp.Length, nd = cd.Length;
         if (UseDivisorHeap(np, nd))
-            return words == 2
-                ? DivideDivisorHeap2<TOps, TC, TAcc>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount)
-                : DivideDivisorHeapN<TOps, TC, TAcc>(ep, cp, ed, cd, words, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount);
+            return words switch
+            {
+                2 => DivideDivisorHeapK<TOps, TC, TAcc, Key2>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount),
+                3 => DivideDivisorHeapK<TOps, TC, TAcc, Key3>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount),
+                4 => DivideDivisorHeapK<TOps, TC, TAcc, Key4>(ep, cp, ed, cd, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount),
+                _ => DivideDivisorHeapN<TOps, TC, TAcc>(ep, cp, ed, cd, words, guard, qMax, limit, qSumLimit, magnitude, out qe, out qc, out qCount),
+            };
         double qSum = 0;
         int cap = Math.Max(16, Math.Min(np, 1 << 16));
         qe = new ulong[cap * N];

@@ -53,14 +53,35 @@ internal static partial class PolynomialMultiply
         where TOps : ICoefficientOps<TC, TAcc>
         => HeapProduct<TKey, Square, TOps, TC, TAcc>(ea, ca, ea, ca, ref oe, ref oc);
 
-    /// <summary>Squaring with one, two or more packed words (see <see cref="SquareHeapK"/>).</summary>
+    /// <summary>Squaring with packed exponents of any number of words: the triangle heap
+    /// (<see cref="SquareHeapK"/>) for one to four words, the full product beyond.</summary>
     internal static int SquareHeap<TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, int words, ref ulong[] oe, ref TAcc[] oc)
         where TOps : ICoefficientOps<TC, TAcc> => words switch
         {
             1 => SquareHeapK<Key1, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
             2 => SquareHeapK<Key2, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
-            _ => -1,
+            3 => SquareHeapK<Key3, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
+            4 => SquareHeapK<Key4, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
+            _ => MultiplyHeapN<TOps, TC, TAcc>(ea, ca, ea, ca, words, ref oe, ref oc),
         };
+
+    /// <summary>Heap product A·B of packed operands (<paramref name="words"/> words per term): the
+    /// exponent is held inline in the heap entries for one to four words (<see cref="MultiplyHeapK"/>),
+    /// in a row buffer beyond (<see cref="MultiplyHeapN"/>). The shorter operand indexes the heap rows.</summary>
+    internal static int HeapMultiply<TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ReadOnlySpan<ulong> eb, ReadOnlySpan<TC> cb,
+        int words, ref ulong[] oe, ref TAcc[] oc)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        if (cb.Length < ca.Length) return HeapMultiply<TOps, TC, TAcc>(eb, cb, ea, ca, words, ref oe, ref oc);
+        return words switch
+        {
+            1 => MultiplyHeapK<Key1, TOps, TC, TAcc>(ea, ca, eb, cb, ref oe, ref oc),
+            2 => MultiplyHeapK<Key2, TOps, TC, TAcc>(ea, ca, eb, cb, ref oe, ref oc),
+            3 => MultiplyHeapK<Key3, TOps, TC, TAcc>(ea, ca, eb, cb, ref oe, ref oc),
+            4 => MultiplyHeapK<Key4, TOps, TC, TAcc>(ea, ca, eb, cb, ref oe, ref oc),
+            _ => MultiplyHeapN<TOps, TC, TAcc>(ea, ca, eb, cb, words, ref oe, ref oc),
+        };
+    }
 
     /// <summary>Compile-time choice between a product and a square in <see cref="HeapProduct"/>.</summary>
     private interface IHeapShape { static abstract bool IsSquare { get; } }

@@ -177,20 +177,11 @@ internal static partial class PolynomialMultiply
             layout.Pack(eb, n, s.MinB, pb);
             var ra = pa.AsSpan(0, ca.Length * N);
             var rb = pb.AsSpan(0, cb.Length * N);
-            bool swap = cb.Length < ca.Length;
             var oe = Pool.Rent<ulong>(estimate * N);
             acc = Pool.Rent<TAcc>(estimate);
-            if (square && N <= 2)
-                count = SquareHeap<TOps, TC, TAcc>(ra, ca, N, ref oe, ref acc);
-            else if (N == 1)
-                count = swap ? MultiplyHeap1<TOps, TC, TAcc>(rb, cb, ra, ca, ref oe, ref acc)
-                             : MultiplyHeap1<TOps, TC, TAcc>(ra, ca, rb, cb, ref oe, ref acc);
-            else if (N == 2)
-                count = swap ? MultiplyHeap2<TOps, TC, TAcc>(rb, cb, ra, ca, ref oe, ref acc)
-                             : MultiplyHeap2<TOps, TC, TAcc>(ra, ca, rb, cb, ref oe, ref acc);
-            else
-                count = swap ? MultiplyHeapN<TOps, TC, TAcc>(rb, cb, ra, ca, N, ref oe, ref acc)
-                             : MultiplyHeapN<TOps, TC, TAcc>(ra, ca, rb, cb, N, ref oe, ref acc);
+            count = square
+                ? SquareHeap<TOps, TC, TAcc>(ra, ca, N, ref oe, ref acc)
+                : HeapMultiply<TOps, TC, TAcc>(ra, ca, rb, cb, N, ref oe, ref acc);
             Pool.Return(pa);
             Pool.Return(pb);
             exps = new int[count * n];

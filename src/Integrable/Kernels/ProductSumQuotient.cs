@@ -95,7 +95,7 @@ internal static class ProductSumQuotient
         try
         {
             int n1, n2;
-            if (ReferenceEquals(ea, eb) && W <= 2)
+            if (ReferenceEquals(ea, eb))
             {
                 pa = Pack(layout, ea, n, s1.MinA, ca.Length);
                 n1 = Square(layout, pa, wa, s1.MinA, lo, out e1, out c1);
@@ -106,7 +106,7 @@ internal static class ProductSumQuotient
                 pb = Pack(layout, eb, n, s1.MinB, cb.Length);
                 n1 = Product(pa, wa, pb, wb, W, out e1, out c1);
             }
-            if (ReferenceEquals(ec, ed) && W <= 2)
+            if (ReferenceEquals(ec, ed))
             {
                 pc = Pack(layout, ec, n, s2.MinA, cc.Length);
                 n2 = Square(layout, pc, wc, s2.MinA, lo, out e2, out c2);
@@ -206,14 +206,7 @@ internal static class ProductSumQuotient
         int estimate = Math.Max(na, nb) * 2;
         oe = Pool.Rent<ulong>(estimate * words);
         oc = Pool.Rent<long>(estimate);
-        var ra = pa.AsSpan(0, na * words);
-        var rb = pb.AsSpan(0, nb * words);
-        bool swap = nb < na;
-        if (words == 1)
-            return swap ? PolynomialMultiply.MultiplyHeap1<Word64Ops, long, long>(rb, wb, ra, wa, ref oe, ref oc)
-                        : PolynomialMultiply.MultiplyHeap1<Word64Ops, long, long>(ra, wa, rb, wb, ref oe, ref oc);
-        return swap ? PolynomialMultiply.MultiplyHeapN<Word64Ops, long, long>(rb, wb, ra, wa, words, ref oe, ref oc)
-                    : PolynomialMultiply.MultiplyHeapN<Word64Ops, long, long>(ra, wa, rb, wb, words, ref oe, ref oc);
+        return PolynomialMultiply.HeapMultiply<Word64Ops, long, long>(pa.AsSpan(0, na * words), wa, pb.AsSpan(0, nb * words), wb, words, ref oe, ref oc);
     }
 
     /// <summary>A·A by the heap on the triangle (<see cref="PolynomialMultiply.SquareHeap"/>), A packed with

@@ -59,6 +59,7 @@ public static class OctahedronRecurrence
         if (k < h0 || ((k - h0) & 1) != 0)
             throw new ArgumentException($"({i}, {j}, {k}) is not on or above the stepped surface with matching parity (surface height there: {h0})");
         var memo = new Dictionary<(int, int, int), T>();
+        var fused = ring as IProductSumDivision<T>;
         T Value(int x, int y, int z)
         {
             if (x < iMin || x > iMax) return boundary!(x, y, z);
@@ -69,13 +70,17 @@ public static class OctahedronRecurrence
             foreach (var (dx, dy) in Neighbours)
                 if (x + dx >= iMin && x + dx <= iMax && Math.Abs(surface.Height(x + dx, y + dy) - h) != 1)
                     throw new ArgumentException($"the surface is not stepped between ({x}, {y}) and ({x + dx}, {y + dy})");
-            var num = ring.Add(ring.Multiply(Value(x + 1, y, z - 1), Value(x - 1, y, z - 1)),
-                               ring.Multiply(Value(x, y + 1, z - 1), Value(x, y - 1, z - 1)));
+            T a = Value(x + 1, y, z - 1), b = Value(x - 1, y, z - 1), c = Value(x, y + 1, z - 1), d = Value(x, y - 1, z - 1);
             var den = Value(x, y, z - 2);
-            if (!ring.TryDivide(num, den, out v))
+            // The exchange step (a·b + c·d)/den, fused where the ring offers it (Laurent polynomials).
+            T q;
+            bool exact = fused is not null
+                ? fused.TryDivideProductSum(a, b, c, d, den, out q)
+                : ring.TryDivide(ring.Add(ring.Multiply(a, b), ring.Multiply(c, d)), den, out q);
+            if (!exact)
                 throw new SingularStepException(z, $"f({x},{y},{z})", $"division by f({x},{y},{z - 2}) is not exact in {ring}");
-            memo[(x, y, z)] = v;
-            return v;
+            memo[(x, y, z)] = q;
+            return q;
         }
         return Value(i, j, k);
     }

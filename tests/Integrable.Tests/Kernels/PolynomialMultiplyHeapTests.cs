@@ -177,6 +177,51 @@ public sealed class PolynomialMultiplyHeapTests
             }
     }
 
+    /// <summary>Variable counts that pack A·B into three and four words (Key3, Key4 inline in the heap)
+    /// and into six (the row-buffer kernel).</summary>
+    public static TheoryData<int, int> ManyWordShapes => new() { { 33, 3 }, { 45, 4 }, { 70, 6 } };
+
+    /// <summary>Two anchor terms (every exponent −4, every exponent 4) fix the field widths; the other terms
+    /// vary in only one variable per 13, so most product exponents agree on their leading words and the
+    /// order is decided by the later ones.</summary>
+    private static LaurentPolynomial Clustered(Random rng, LaurentPolynomialRing ring, Coefficients kind, int maxTerms)
+    {
+        int n = ring.VariableCount;
+        var builder = ring.CreateBuilder();
+        builder.Add(new Rational(Coefficient(rng, kind, out var d0), d0), Enumerable.Repeat(-4, n).ToArray());
+        builder.Add(new Rational(Coefficient(rng, kind, out var d1), d1), Enumerable.Repeat(4, n).ToArray());
+        for (int t = rng.Next(2, maxTerms); t > 0; t--)
+        {
+            var e = new int[n];
+            for (int v = 0; v < n; v += 13) e[v] = rng.Next(0, 3);
+            builder.Add(new Rational(Coefficient(rng, kind, out var d), d), e);
+        }
+        return builder.ToPolynomial();
+    }
+
+    [Theory]
+    [MemberData(nameof(ManyWordShapes))]
+    public void Multiply_ThreeOrMoreWords_ProductsAndSquaresMatchNaive(int vars, int words)
+    {
+        // Differential test against the naive product (common practice); exponents in ±4 need 4 bits per field.
+        var ring = new LaurentPolynomialRing([.. Enumerable.Range(0, vars).Select(i => $"z{i}")]);
+        var rng = new Random(4200 + vars);
+        foreach (var kind in new[] { Coefficients.Small, Coefficients.Signed62, Coefficients.Wide, Coefficients.Fractions })
+            for (int i = 0; i < 6; i++)
+            {
+                LaurentPolynomial a, b;
+                int attempts = 0;
+                do
+                {
+                    Assert.True(++attempts < 500, $"no operands with a {words}-word layout in {vars} variables");
+                    a = i % 2 == 0 ? RandomPolynomial(rng, ring, Layout.ManyVariables, kind, 25) : Clustered(rng, ring, kind, 25);
+                    b = i % 2 == 0 ? RandomPolynomial(rng, ring, Layout.ManyVariables, kind, 35) : Clustered(rng, ring, kind, 35);
+                } while (LayoutOf(a, b, out _).Words != words || LayoutOf(a, a, out _).Words != words);
+                AssertSame(NaiveProduct(a, b), HeapProduct(a, b), $"{vars} variables {kind} #{i}");
+                AssertSame(NaiveProduct(a, a), HeapProduct(a, a), $"square, {vars} variables {kind} #{i}");
+            }
+    }
+
     [Fact]
     public void Multiply_TwoWordTelescopingProduct_CancelsToTwoTerms()
     {

@@ -23,10 +23,14 @@ internal static partial class PolynomialMultiply
     /// </remarks>
     /// <returns>Number of output terms written to <paramref name="oi"/> (indices, descending) and
     /// <paramref name="oc"/> (accumulators).</returns>
+    /// <para>Squares: when <paramref name="doubledA"/> is given (2·A's coefficients, B = A), only group
+    /// pairs with h_a ≥ h_b are visited; a pair with h_a &gt; h_b stands for itself and its mirror (which
+    /// touches the same cells) with the doubled coefficients, and a diagonal pair is done in full. That is
+    /// about half the multiply-adds; every partial sum is still a partial sum of the full product.</para>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static int MultiplyDense<TOps, TC, TAcc>(
         ReadOnlySpan<long> ia, ReadOnlySpan<TC> ca, ReadOnlySpan<long> ib, ReadOnlySpan<TC> cb, long window, bool aligned,
-        ref long[] oi, ref TAcc[] oc)
+        ref long[] oi, ref TAcc[] oc, TC[]? doubledA = null)
         where TOps : ICoefficientOps<TC, TAcc>
     {
         int L = checked((int)window);
@@ -62,13 +66,15 @@ internal static partial class PolynomialMultiply
                 while (bg >= 0 && bHigh[bg] < target) bg--;
                 if (bg < 0) break;
                 if (bHigh[bg] != target) continue;
+                if (doubledA is not null && g > bg) continue;   // the mirror of a pair already done
                 int b0 = bStart[bg], b1 = bStart[bg + 1];
                 int a0 = aStart[g], a1 = aStart[g + 1];
                 // Lows are descending inside a group: first + first is the largest cell, last + last the smallest.
                 int top = la[a0] + lb[b0], bottom = la[a1 - 1] + lb[b1 - 1];
                 if (top > lowHi) lowHi = top;
                 if (bottom < lowLo) lowLo = bottom;
-                TOps.MulAddBlock(ref buf[0], ref Unsafe.Add(ref caRef, a0), ref la[a0], a1 - a0, ref Unsafe.Add(ref cbRef, b0), ref lbBytes[b0], b1 - b0);
+                ref TC aCoefficients = ref doubledA is not null && g < bg ? ref doubledA[a0] : ref Unsafe.Add(ref caRef, a0);
+                TOps.MulAddBlock(ref buf[0], ref aCoefficients, ref la[a0], a1 - a0, ref Unsafe.Add(ref cbRef, b0), ref lbBytes[b0], b1 - b0);
             }
             if (aligned)
             {
@@ -148,5 +154,38 @@ internal static partial class PolynomialMultiply
         }
         start[groups] = n;
         Pool.Return(hs);
+    }
+
+    /// <summary>2·c for every coefficient, or false when some doubled value would not fit the coefficient
+    /// type (then the square is computed as a product).</summary>
+    internal static bool TryDouble<TC>(TC[] c, out TC[] doubled)
+    {
+        doubled = new TC[c.Length];
+        if (c is long[] words && doubled is long[] w2)
+        {
+            for (int i = 0; i < words.Length; i++)
+            {
+                long x = words[i];
+                if (x > long.MaxValue / 2 || x < long.MinValue / 2) return false;
+                w2[i] = 2 * x;
+            }
+            return true;
+        }
+        if (c is Magnitude192[] mags && doubled is Magnitude192[] m2)
+        {
+            for (int i = 0; i < mags.Length; i++)
+            {
+                var m = mags[i];
+                if ((m.L2 >> 61) != 0) return false;   // stay below 2^190, inside the multi-limb bound
+                m2[i] = new Magnitude192 { L2 = (m.L2 << 1) | (m.L1 >> 63), L1 = (m.L1 << 1) | (m.L0 >> 63), L0 = m.L0 << 1, Negative = m.Negative };
+            }
+            return true;
+        }
+        if (c is System.Numerics.BigInteger[] bigs && doubled is System.Numerics.BigInteger[] b2)
+        {
+            for (int i = 0; i < bigs.Length; i++) b2[i] = bigs[i] << 1;
+            return true;
+        }
+        return false;
     }
 }

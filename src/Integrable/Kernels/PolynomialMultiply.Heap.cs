@@ -47,23 +47,31 @@ internal static partial class PolynomialMultiply
     /// term a_i² once and a_i·a_j (i &lt; j) twice, so about half the heap operations of a product.
     /// Row i starts at column i; it waits for (i−1, i) exactly as a row of a product waits for the
     /// row above, so the delayed-insertion invariant of <see cref="MultiplyHeapK"/> carries over.
-    /// The accumulated terms are those of the full product, so the same accumulator bound holds.</summary>
-    internal static int SquareHeapK<TKey, TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, ref ulong[] oe, ref TAcc[] oc)
+    /// The accumulated terms are those of the full product, so the same accumulator bound holds.
+    /// With <paramref name="doubled"/> (2·A's coefficients) an off-diagonal product is one multiply-add
+    /// a_i·(2a_j) instead of two, which matters for multi-limb coefficients.</summary>
+    internal static int SquareHeapK<TKey, TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, TC[]? doubled, ref ulong[] oe, ref TAcc[] oc)
         where TKey : struct, IPackedKey<TKey>
         where TOps : ICoefficientOps<TC, TAcc>
-        => HeapProduct<TKey, Square, TOps, TC, TAcc>(ea, ca, ea, ca, ref oe, ref oc);
+        => doubled is null
+            ? HeapProduct<TKey, Square, TOps, TC, TAcc>(ea, ca, ea, ca, ref oe, ref oc)
+            : HeapProduct<TKey, DoubledSquare, TOps, TC, TAcc>(ea, ca, ea, doubled, ref oe, ref oc);
 
     /// <summary>Squaring with packed exponents of any number of words: the triangle heap
     /// (<see cref="SquareHeapK"/>) for one to four words, the full product beyond.</summary>
-    internal static int SquareHeap<TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, ReadOnlySpan<TC> ca, int words, ref ulong[] oe, ref TAcc[] oc)
-        where TOps : ICoefficientOps<TC, TAcc> => words switch
+    internal static int SquareHeap<TOps, TC, TAcc>(ReadOnlySpan<ulong> ea, TC[] ca, int words, ref ulong[] oe, ref TAcc[] oc)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        var doubled = words <= 4 && TryDouble(ca, out var twice) ? twice : null;
+        return words switch
         {
-            1 => SquareHeapK<Key1, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
-            2 => SquareHeapK<Key2, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
-            3 => SquareHeapK<Key3, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
-            4 => SquareHeapK<Key4, TOps, TC, TAcc>(ea, ca, ref oe, ref oc),
+            1 => SquareHeapK<Key1, TOps, TC, TAcc>(ea, ca, doubled, ref oe, ref oc),
+            2 => SquareHeapK<Key2, TOps, TC, TAcc>(ea, ca, doubled, ref oe, ref oc),
+            3 => SquareHeapK<Key3, TOps, TC, TAcc>(ea, ca, doubled, ref oe, ref oc),
+            4 => SquareHeapK<Key4, TOps, TC, TAcc>(ea, ca, doubled, ref oe, ref oc),
             _ => MultiplyHeapN<TOps, TC, TAcc>(ea, ca, ea, ca, words, ref oe, ref oc),
         };
+    }
 
     /// <summary>Heap product A·B of packed operands (<paramref name="words"/> words per term): the
     /// exponent is held inline in the heap entries for one to four words (<see cref="MultiplyHeapK"/>),
@@ -84,9 +92,15 @@ internal static partial class PolynomialMultiply
     }
 
     /// <summary>Compile-time choice between a product and a square in <see cref="HeapProduct"/>.</summary>
-    private interface IHeapShape { static abstract bool IsSquare { get; } }
-    private struct Product : IHeapShape { public static bool IsSquare => false; }
-    private struct Square : IHeapShape { public static bool IsSquare => true; }
+    private interface IHeapShape
+    {
+        static abstract bool IsSquare { get; }
+        /// <summary>B holds 2·A's coefficients (off-diagonal products are a_i·b_j, the diagonal a_i·a_i).</summary>
+        static abstract bool Doubled { get; }
+    }
+    private struct Product : IHeapShape { public static bool IsSquare => false; public static bool Doubled => false; }
+    private struct Square : IHeapShape { public static bool IsSquare => true; public static bool Doubled => false; }
+    private struct DoubledSquare : IHeapShape { public static bool IsSquare => true; public static bool Doubled => true; }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static int HeapProduct<TKey, TShape, TOps, TC, TAcc>(
@@ -141,8 +155,13 @@ internal static partial class PolynomialMultiply
                     Unsafe.Add(ref store, sp) = r;
                     Unsafe.Add(ref store, sp + 1) = j;
                     sp += 2;
-                    TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
-                    if (TShape.IsSquare && r != j) TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
+                    if (TShape.Doubled)
+                        TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), r == j ? Unsafe.Add(ref qa, j) : Unsafe.Add(ref qb, j));
+                    else
+                    {
+                        TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
+                        if (TShape.IsSquare && r != j) TOps.MulAdd(ref acc, Unsafe.Add(ref qa, r), Unsafe.Add(ref qb, j));
+                    }
                     r = Unsafe.Add(ref next, r);
                 } while (r >= 0);
             } while (hlen > 1 && TKey.Same(Unsafe.Add(ref heap, 1).Exp, exp));

@@ -149,7 +149,8 @@ internal static partial class PolynomialMultiply
             DenseWindow(in s, Unsafe.SizeOf<TAcc>(), out long window, out bool aligned);
             var oi = Pool.Rent<long>(estimate);
             acc = Pool.Rent<TAcc>(estimate);
-            count = MultiplyDense<TOps, TC, TAcc>(ia.AsSpan(0, ca.Length), ca, ib.AsSpan(0, cb.Length), cb, window, aligned, ref oi, ref acc);
+            TC[]? doubled = square && TryDouble(ca, out var twice) ? twice : null;
+            count = MultiplyDense<TOps, TC, TAcc>(ia.AsSpan(0, ca.Length), ca, ib.AsSpan(0, cb.Length), cb, window, aligned, ref oi, ref acc, doubled);
             Pool.Return(ia);
             Pool.Return(ib);
             exps = new int[count * n];

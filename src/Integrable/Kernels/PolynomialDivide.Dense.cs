@@ -106,11 +106,8 @@ internal static partial class PolynomialDivide
                     long qd = digit - d0Digits[v];
                     if (qd < 0 || qd > qRange[v]) return DivideStatus.NotDivisible;
                 }
-                int st = TOps.TryDivideExact(in buf[k], lc, limit, out TC q);
-                if (st == 1) return DivideStatus.NotDivisible;
-                qSum += magnitude(q);
-                if (st == 2) return DivideStatus.QuotientTooLarge;
-                if (qSum > qSumLimit) return DivideStatus.TooLarge;
+                var status = QuotientCoefficient<TOps, TC, TAcc>(in buf[k], lc, limit, magnitude, ref qSum, qSumLimit, out TC q);
+                if (status != DivideStatus.Exact) return status;
                 buf[k] = default!;
                 if (qCount == qi.Length)
                 {

@@ -128,11 +128,8 @@ internal static partial class PolynomialDivide
 
             // New quotient term: exp / d0 must be a monomial inside the quotient's box.
             if (!TKey.TryQuotientExponent(exp, d0, guard, qMax, out TKey t)) return DivideStatus.NotDivisible;
-            int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
-            if (st == 1) return DivideStatus.NotDivisible;
-            qSum += magnitude(q);
-            if (st == 2) return DivideStatus.QuotientTooLarge;
-            if (qSum > qSumLimit) return DivideStatus.TooLarge;
+            var status = QuotientCoefficient<TOps, TC, TAcc>(in acc, lc, limit, magnitude, ref qSum, qSumLimit, out TC q);
+            if (status != DivideStatus.Exact) return status;
             if (qCount == qc.Length)
             {
                 int size = qc.Length * 2;
@@ -226,20 +223,7 @@ internal static partial class PolynomialDivide
             {
                 int r = hhead[1];
                 hlen--;
-                if (hlen > 1)
-                {
-                    int lh = hhead[hlen];
-                    var le = rowExp.AsSpan(lh * N, N);
-                    int hole = 1, c = 2;
-                    while (c < hlen)
-                    {
-                        if (c + 1 < hlen && PolynomialMultiply.CompareN(rowExp.AsSpan(hhead[c + 1] * N, N), rowExp.AsSpan(hhead[c] * N, N)) > 0) c++;
-                        if (PolynomialMultiply.CompareN(rowExp.AsSpan(hhead[c] * N, N), le) <= 0) break;
-                        hhead[hole] = hhead[c];
-                        hole = c; c = 2 * c;
-                    }
-                    hhead[hole] = lh;
-                }
+                if (hlen > 1) PolynomialMultiply.PopRootN(rowExp, N, hhead, hlen);
                 for (; r >= 0; r = next[r])
                 {
                     TOps.MulSub(ref acc, qc[qi[r]], cd[r]);
@@ -264,18 +248,9 @@ internal static partial class PolynomialDivide
 
             if (TOps.IsZero(in acc)) continue;
 
-            for (int w = 0; w < N; w++)
-            {
-                ulong x = exp[w], d = ed[w];
-                t[w] = x - d;
-                if (((x - d) & guard[w]) != 0 || x < d || ((qMax[w] - t[w]) & guard[w]) != 0 || t[w] > qMax[w])
-                    return DivideStatus.NotDivisible;
-            }
-            int st = TOps.TryDivideExact(in acc, lc, limit, out TC qcoef);
-            if (st == 1) return DivideStatus.NotDivisible;
-            qSum += magnitude(qcoef);
-            if (st == 2) return DivideStatus.QuotientTooLarge;
-            if (qSum > qSumLimit) return DivideStatus.TooLarge;
+            if (!TryQuotientExponentN(exp, ed[..N], guard, qMax, t)) return DivideStatus.NotDivisible;
+            var status = QuotientCoefficient<TOps, TC, TAcc>(in acc, lc, limit, magnitude, ref qSum, qSumLimit, out TC qcoef);
+            if (status != DivideStatus.Exact) return status;
             if (qCount == qc.Length)
             {
                 int size = qc.Length * 2;

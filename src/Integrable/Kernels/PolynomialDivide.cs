@@ -115,11 +115,8 @@ internal static partial class PolynomialDivide
             // New quotient term: exp / d0 must be a monomial inside the quotient's box.
             ulong t = exp - d0;
             if ((t & guard) != 0 || exp < d0 || ((qMax - t) & guard) != 0 || t > qMax) return DivideStatus.NotDivisible;
-            int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
-            if (st == 1) return DivideStatus.NotDivisible;
-            qSum += magnitude(q);
-            if (st == 2) return DivideStatus.QuotientTooLarge;
-            if (qSum > qSumLimit) return DivideStatus.TooLarge;
+            var status = QuotientCoefficient<TOps, TC, TAcc>(in acc, lc, limit, magnitude, ref qSum, qSumLimit, out TC q);
+            if (status != DivideStatus.Exact) return status;
             if (qCount == qe.Length)
             {
                 int size = qe.Length * 2;
@@ -141,6 +138,32 @@ internal static partial class PolynomialDivide
             }
         }
         return DivideStatus.Exact;
+    }
+
+    /// <summary>The coefficient of a new quotient term, acc / lc, shared by every division loop.</summary>
+    /// <returns><see cref="DivideStatus.Exact"/> to go on; otherwise the status that ends the division:
+    /// not an exact integer quotient (not divisible), too large for the coefficient type, or a Σ|q| past
+    /// the accumulator's limit.</returns>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static DivideStatus QuotientCoefficient<TOps, TC, TAcc>(in TAcc acc, TC lc, TC limit, Func<TC, double> magnitude,
+        ref double qSum, double qSumLimit, out TC q)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        int st = TOps.TryDivideExact(in acc, lc, limit, out q);
+        if (st == 1) return DivideStatus.NotDivisible;
+        qSum += magnitude(q);
+        if (st == 2) return DivideStatus.QuotientTooLarge;
+        return qSum > qSumLimit ? DivideStatus.TooLarge : DivideStatus.Exact;
+    }
+
+    /// <summary>Multi-word <see cref="Key1.TryWord"/>: t = exp − d0 word by word, false unless t is a
+    /// monomial inside the quotient's box.</summary>
+    private static bool TryQuotientExponentN(ReadOnlySpan<ulong> exp, ReadOnlySpan<ulong> d0, ReadOnlySpan<ulong> guard,
+        ReadOnlySpan<ulong> qMax, Span<ulong> t)
+    {
+        for (int w = 0; w < t.Length; w++)
+            if (!Key1.TryWord(exp[w], d0[w], guard[w], qMax[w], out t[w])) return false;
+        return true;
     }
 
     private static void Insert(ulong[] hexp, int[] hhead, int[] next, ref int hlen, int row, ulong e)
@@ -218,20 +241,7 @@ internal static partial class PolynomialDivide
             {
                 int r = hhead[1];
                 hlen--;
-                if (hlen > 1)
-                {
-                    int lh = hhead[hlen];
-                    var le = rowExp.AsSpan(lh * N, N);
-                    int hole = 1, c = 2;
-                    while (c < hlen)
-                    {
-                        if (c + 1 < hlen && PolynomialMultiply.CompareN(rowExp.AsSpan(hhead[c + 1] * N, N), rowExp.AsSpan(hhead[c] * N, N)) > 0) c++;
-                        if (PolynomialMultiply.CompareN(rowExp.AsSpan(hhead[c] * N, N), le) <= 0) break;
-                        hhead[hole] = hhead[c];
-                        hole = c; c = 2 * c;
-                    }
-                    hhead[hole] = lh;
-                }
+                if (hlen > 1) PolynomialMultiply.PopRootN(rowExp, N, hhead, hlen);
                 for (; r >= 0; r = next[r])
                 {
                     TOps.MulSub(ref acc, qc[r], cd[nj[r]]);
@@ -255,18 +265,9 @@ internal static partial class PolynomialDivide
 
             if (TOps.IsZero(in acc)) continue;
 
-            for (int w = 0; w < N; w++)
-            {
-                ulong x = exp[w], d = ed[w];
-                t[w] = x - d;
-                if (((x - d) & guard[w]) != 0 || x < d || ((qMax[w] - t[w]) & guard[w]) != 0 || t[w] > qMax[w])
-                    return DivideStatus.NotDivisible;
-            }
-            int st = TOps.TryDivideExact(in acc, lc, limit, out TC q);
-            if (st == 1) return DivideStatus.NotDivisible;
-            qSum += magnitude(q);
-            if (st == 2) return DivideStatus.QuotientTooLarge;
-            if (qSum > qSumLimit) return DivideStatus.TooLarge;
+            if (!TryQuotientExponentN(exp, ed[..N], guard, qMax, t)) return DivideStatus.NotDivisible;
+            var status = QuotientCoefficient<TOps, TC, TAcc>(in acc, lc, limit, magnitude, ref qSum, qSumLimit, out TC q);
+            if (status != DivideStatus.Exact) return status;
             if (qCount == qc.Length)
             {
                 int size = qc.Length * 2;

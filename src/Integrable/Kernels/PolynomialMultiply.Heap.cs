@@ -291,20 +291,7 @@ internal static partial class PolynomialMultiply
             {
                 int r = hhead[1];
                 hlen--;
-                if (hlen > 1)
-                {
-                    int lh = hhead[hlen];
-                    var le = rowExp.AsSpan(lh * N, N);
-                    int hole = 1, c = 2;
-                    while (c < hlen)
-                    {
-                        if (c + 1 < hlen && CompareN(rowExp.AsSpan(hhead[c + 1] * N, N), rowExp.AsSpan(hhead[c] * N, N)) > 0) c++;
-                        if (CompareN(rowExp.AsSpan(hhead[c] * N, N), le) <= 0) break;
-                        hhead[hole] = hhead[c];
-                        hole = c; c = 2 * c;
-                    }
-                    hhead[hole] = lh;
-                }
+                if (hlen > 1) PopRootN(rowExp, N, hhead, hlen);
                 for (; r >= 0; r = next[r])
                 {
                     int j = nj[r];
@@ -366,6 +353,24 @@ internal static partial class PolynomialMultiply
         }
         hhead[j] = row;
         next[row] = -1;
+    }
+
+    /// <summary>Removes the root of a heap of row indices (<paramref name="hhead"/>[1..]) ordered by the
+    /// rows' exponents in <paramref name="rowExp"/> (<paramref name="N"/> words each), whose last entry is
+    /// at <paramref name="last"/>: the last entry sifts down from the root.</summary>
+    internal static void PopRootN(ulong[] rowExp, int N, int[] hhead, int last)
+    {
+        int lh = hhead[last];
+        var le = rowExp.AsSpan(lh * N, N);
+        int hole = 1, c = 2;
+        while (c < last)
+        {
+            if (c + 1 < last && CompareN(rowExp.AsSpan(hhead[c + 1] * N, N), rowExp.AsSpan(hhead[c] * N, N)) > 0) c++;
+            if (CompareN(rowExp.AsSpan(hhead[c] * N, N), le) <= 0) break;
+            hhead[hole] = hhead[c];
+            hole = c; c = 2 * c;
+        }
+        hhead[hole] = lh;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

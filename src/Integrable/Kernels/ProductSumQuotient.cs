@@ -94,29 +94,8 @@ internal static class ProductSumQuotient
         long[]? c1 = null, c2 = null, cs = null;
         try
         {
-            int n1, n2;
-            if (ReferenceEquals(ea, eb))
-            {
-                pa = Pack(layout, ea, n, s1.MinA, ca.Length);
-                n1 = Square(layout, pa, wa, s1.MinA, lo, out e1, out c1);
-            }
-            else
-            {
-                pa = Pack(layout, ea, n, offA, ca.Length);
-                pb = Pack(layout, eb, n, s1.MinB, cb.Length);
-                n1 = Product(pa, wa, pb, wb, W, out e1, out c1);
-            }
-            if (ReferenceEquals(ec, ed))
-            {
-                pc = Pack(layout, ec, n, s2.MinA, cc.Length);
-                n2 = Square(layout, pc, wc, s2.MinA, lo, out e2, out c2);
-            }
-            else
-            {
-                pc = Pack(layout, ec, n, offC, cc.Length);
-                pd = Pack(layout, ed, n, s2.MinB, cd.Length);
-                n2 = Product(pc, wc, pd, wd, W, out e2, out c2);
-            }
+            int n1 = PackedProduct(layout, ea, wa, eb, wb, in s1, offA, lo, out pa, out pb, out e1, out c1);
+            int n2 = PackedProduct(layout, ec, wc, ed, wd, in s2, offC, lo, out pc, out pd, out e2, out c2);
             int ns = Merge(e1, c1, n1, e2, c2, n2, W, out es, out cs, out long maxS);
             Answered++;
             if (ns == 0) { coeffs = []; exps = []; return FusedStatus.Exact; }
@@ -197,6 +176,24 @@ internal static class ProductSumQuotient
         var packed = Pool.Rent<ulong>(terms * layout.Words);
         layout.Pack(e, n, offset, packed);
         return packed;
+    }
+
+    /// <summary>X·Y in the frame of the sum (packed exponents minus <paramref name="lo"/>) into pooled
+    /// buffers, squaring when X and Y are the same polynomial; the packed operands are handed back so that
+    /// the caller returns them to the pool. Returns the number of terms.</summary>
+    private static int PackedProduct(ExponentLayout layout, int[] ex, long[] wx, int[] ey, long[] wy, in ProductShape shape,
+        int[] offX, long[] lo, out ulong[] px, out ulong[]? py, out ulong[] oe, out long[] oc)
+    {
+        int n = shape.Nvars;
+        if (ReferenceEquals(ex, ey))
+        {
+            px = Pack(layout, ex, n, shape.MinA, wx.Length);
+            py = null;
+            return Square(layout, px, wx, shape.MinA, lo, out oe, out oc);
+        }
+        px = Pack(layout, ex, n, offX, wx.Length);
+        py = Pack(layout, ey, n, shape.MinB, wy.Length);
+        return Product(px, wx, py, wy, layout.Words, out oe, out oc);
     }
 
     /// <summary>Heap product of packed operands into pooled buffers; returns the number of terms.</summary>

@@ -11,7 +11,7 @@ namespace Integrable.Benchmarks;
 /// x_{n+4} = (x_{n+3} x_{n+1} + x_{n+2}^2)/x_n, from the symbols x_0..x_3 as exact Laurent polynomials, through the
 /// library's compiled recurrence over <see cref="LaurentPolynomialRing"/>. Usage: <c>-- W2 N [BUDGET_SECONDS]</c>.
 /// Prints <c>n=N terms=&lt;terms of x_N&gt; seconds=&lt;cumulative wall time to compute x_4..x_N&gt; cpu=&lt;process CPU time&gt;
-/// coeffsum=&lt;x_N at all ones&gt;</c>; <c>-- W2 N breakdown</c> times products, sum and division separately;
+/// coeffsum=&lt;x_N at all ones&gt;</c>; <c>-- W2 N breakdown</c> times products, sum and division separately (the last four steps one by one on stderr);
 /// with a budget, one line per step (like the reference) and, last, the largest n within the budget.</summary>
 public sealed class W2Workload : IWorkload
 {
@@ -76,6 +76,9 @@ public sealed class W2Workload : IWorkload
             add += Stopwatch.GetElapsedTime(t1, t2).TotalSeconds;
             div += Stopwatch.GetElapsedTime(t2, t3).TotalSeconds;
             x.Add(q);
+            if (n > nmax - 4)
+                Console.Error.WriteLine(FormattableString.Invariant(
+                    $"  n={n} multiply={Stopwatch.GetElapsedTime(t0, t1).TotalSeconds:0.000} add={Stopwatch.GetElapsedTime(t1, t2).TotalSeconds:0.000} divide={Stopwatch.GetElapsedTime(t2, t3).TotalSeconds:0.000}"));
         }
         string F(double v) => v.ToString("0.0000", CultureInfo.InvariantCulture);
         return $"n={nmax} terms={x[nmax].TermCount} multiply={F(mul)} add={F(add)} divide={F(div)} total={F(mul + add + div)}";

@@ -73,31 +73,51 @@ internal static class CoefficientForm
 
     /// <summary>The multi-limb form of integer coefficients read straight from the rationals (no common
     /// denominator, no intermediate big integers for word-size values); false when some coefficient is not
-    /// an integer or has 192 bits or more.</summary>
+    /// an integer or has more bits than <typeparamref name="TM"/> holds.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static bool TryIntegerMagnitudes(ReadOnlySpan<Rational> c, out Magnitude192[] magnitudes)
+    public static bool TryIntegerMagnitudes<TM>(ReadOnlySpan<Rational> c, out TM[] magnitudes)
+        where TM : struct, IMagnitude<TM>
     {
-        magnitudes = new Magnitude192[c.Length];
+        magnitudes = new TM[c.Length];
         for (int i = 0; i < c.Length; i++)
         {
             if (c[i].TryGetSmall(out long n, out long d))
             {
                 if (d != 1) return false;
-                magnitudes[i].L0 = n < 0 ? (ulong)(-(n + 1)) + 1UL : (ulong)n;
-                magnitudes[i].Negative = n < 0;
+                magnitudes[i] = TM.FromWord(n);
             }
-            else if (!c[i].IsInteger || !Magnitude192.TryFrom(c[i].Numerator, out magnitudes[i])) return false;
+            else if (!c[i].IsInteger || !TM.TryFrom(c[i].Numerator, out magnitudes[i])) return false;
         }
         return true;
     }
 
-    /// <summary>The multi-limb form of integers, or false when some |value| ≥ 2^191.</summary>
-    public static bool TryMagnitudes(ReadOnlySpan<BigInteger> ints, out Magnitude192[] magnitudes)
+    /// <summary>The multi-limb form of integers, or false when some value has more bits than
+    /// <typeparamref name="TM"/> holds.</summary>
+    public static bool TryMagnitudes<TM>(ReadOnlySpan<BigInteger> ints, out TM[] magnitudes)
+        where TM : struct, IMagnitude<TM>
     {
-        magnitudes = new Magnitude192[ints.Length];
+        magnitudes = new TM[ints.Length];
         for (int i = 0; i < ints.Length; i++)
-            if (!Magnitude192.TryFrom(ints[i], out magnitudes[i])) return false;
+            if (!TM.TryFrom(ints[i], out magnitudes[i])) return false;
         return true;
+    }
+
+    /// <summary>Bit length of the largest |c_i|, or −1 when some coefficient is not an integer.</summary>
+    public static int IntegerBits(ReadOnlySpan<Rational> c)
+    {
+        int bits = 0;
+        ulong or = 0;
+        foreach (var r in c)
+        {
+            if (r.TryGetSmall(out long n, out long d))
+            {
+                if (d != 1) return -1;
+                or |= MultiLimb.UnsignedAbs(n);
+            }
+            else if (!r.IsInteger) return -1;
+            else bits = Math.Max(bits, (int)BigInteger.Abs(r.Numerator).GetBitLength());
+        }
+        return Math.Max(bits, 64 - BitOperations.LeadingZeroCount(or));
     }
 
     /// <summary>Writes c_i = ints_i / denominator with big integers.</summary>

@@ -422,33 +422,18 @@ internal static partial class PolynomialDivide
         foreach (var x in bb) bg = BigInteger.GreatestCommonDivisor(bg, x);
         if (bb[0].Sign < 0) bg = -bg;
         if (!bg.IsOne) for (int i = 0; i < bb.Length; i++) bb[i] /= bg;
-        // Multi-limb path: divisor and quotient below 2^191, dividend below 2^446, so every partial sum
-        // (dividend minus fewer than 2^31 products) stays inside the 448-bit accumulator.
-        if (!PolynomialMultiply.ForceBig && CoefficientForm.TryMagnitudes(bb, out var mdiv))
+        if (!PolynomialMultiply.ForceBig)
         {
-            var p448 = new Int448[ba.Length];
-            bool fits = true;
-            for (int i = 0; i < ba.Length && fits; i++) fits = Int448.TryFrom(ba[i], out p448[i]);
-            if (fits)
-            {
-                var wideStatus = ctx.Run<Wide448Ops, Magnitude192, Int448>(p448, mdiv, default, double.PositiveInfinity, static _ => 0, out var qm, out var qem);
-                if (wideStatus == DivideStatus.NotDivisible) return false;
-                if (wideStatus == DivideStatus.Exact)
-                {
-                    var wideScale = new Rational(bdb, bda * bg);
-                    var wide = new Rational[qm!.Length];
-                    bool unit = wideScale == Rational.One;
-                    for (int i = 0; i < wide.Length; i++)
-                    {
-                        var m = qm[i];
-                        var value = (m.L1 | m.L2) == 0 && m.L0 <= long.MaxValue
-                            ? new Rational(m.Negative ? -(long)m.L0 : (long)m.L0)
-                            : new Rational(m.ToBigInteger());
-                        wide[i] = unit ? value : value * wideScale;
-                    }
-                    return ctx.Finish(wide, qem, out coeffs, out exps);
-                }
-            }
+            // Multi-limb paths: three limbs (divisor and quotient up to 191 bits, dividend up to 446), then
+            // four (255 and 573 bits). The first is skipped when max|P|/‖D‖₁, a lower bound for max|Q|,
+            // already needs more than three limbs.
+            var status = DivideStatus.TooLarge;
+            if (!PolynomialMultiply.ForceFourLimbs && QuotientBitsLowerBound(ba, bb) <= Magnitude192.MaxBits)
+                status = TryDivideMultiLimb<Wide448Ops, Magnitude192, Int448>(ctx, ba, bb, bda, bdb, bg, out coeffs, out exps);
+            if (status is DivideStatus.TooLarge or DivideStatus.QuotientTooLarge)
+                status = TryDivideMultiLimb<Wide576Ops, Magnitude256, Int576>(ctx, ba, bb, bda, bdb, bg, out coeffs, out exps);
+            if (status == DivideStatus.Exact) return true;
+            if (status == DivideStatus.NotDivisible) return false;
         }
         var bigStatus = ctx.Run<BigOps, BigInteger, BigInteger>(ba, bb, BigInteger.Zero, double.PositiveInfinity, static _ => 0, out var qb, out var qeb);
         if (bigStatus != DivideStatus.Exact) return false;
@@ -456,6 +441,49 @@ internal static partial class PolynomialDivide
         var result = new Rational[qb!.Length];
         for (int i = 0; i < result.Length; i++) result[i] = new Rational(qb[i]) * bigScale;
         return ctx.Finish(result, qeb, out coeffs, out exps);
+    }
+
+    /// <summary>Exact division on a multi-limb path: <see cref="DivideStatus.Exact"/> with the quotient,
+    /// <see cref="DivideStatus.NotDivisible"/>, or <see cref="DivideStatus.TooLarge"/> /
+    /// <see cref="DivideStatus.QuotientTooLarge"/> when the operands or the quotient do not fit
+    /// <typeparamref name="TM"/> and <typeparamref name="TAcc"/>. The divisor <paramref name="bb"/> is
+    /// primitive; A/B = bdb/(bda·bg)·ba/bb.</summary>
+    private static DivideStatus TryDivideMultiLimb<TOps, TM, TAcc>(DivisionInput ctx, BigInteger[] ba, BigInteger[] bb,
+        in BigInteger bda, in BigInteger bdb, in BigInteger bg, out Rational[] coeffs, out int[] exps)
+        where TOps : ICoefficientOps<TM, TAcc>
+        where TM : struct, IMagnitude<TM>
+        where TAcc : struct, IMultiLimbAccumulator<TAcc>
+    {
+        coeffs = [];
+        exps = [];
+        if (!CoefficientForm.TryMagnitudes<TM>(bb, out var mdiv)) return DivideStatus.TooLarge;
+        var pAcc = new TAcc[ba.Length];
+        for (int i = 0; i < ba.Length; i++)
+            if (!TAcc.TryFrom(ba[i], out pAcc[i])) return DivideStatus.TooLarge;
+        var status = ctx.Run<TOps, TM, TAcc>(pAcc, mdiv, default, double.PositiveInfinity, static _ => 0, out var qm, out var qem);
+        if (status != DivideStatus.Exact) return status;
+        var scale = new Rational(bdb, bda * bg);
+        bool unit = scale == Rational.One;
+        var quotient = new Rational[qm!.Length];
+        for (int i = 0; i < quotient.Length; i++)
+        {
+            var value = qm[i].TryGetWord(out long w) ? new Rational(w) : new Rational(qm[i].ToBigInteger());
+            quotient[i] = unit ? value : value * scale;
+        }
+        ctx.Finish(quotient, qem, out coeffs, out exps);
+        return DivideStatus.Exact;
+    }
+
+    /// <summary>A lower bound for the bit length of the largest quotient coefficient when B divides A:
+    /// every coefficient of A = Q·B is a sum of q·b over distinct terms of B, so max|Q| ≥ max|A|/‖B‖₁.</summary>
+    private static int QuotientBitsLowerBound(BigInteger[] a, BigInteger[] b)
+    {
+        long maxA = 0;
+        foreach (var x in a) maxA = Math.Max(maxA, x.GetBitLength());
+        var l1 = BigInteger.Zero;
+        foreach (var x in b) l1 += BigInteger.Abs(x);
+        // |x| ≥ 2^(GetBitLength − 2) for every non-zero x of either sign; ‖B‖₁ < 2^bits(‖B‖₁).
+        return (int)(maxA - 2 - l1.GetBitLength());
     }
 
     /// <summary>Shared data of one exact division: packing, index encoding and output conversion.</summary>

@@ -181,6 +181,20 @@ internal static partial class PolynomialMultiply
             }
             return true;
         }
+        if (c is Magnitude256[] mags4 && doubled is Magnitude256[] m4)
+        {
+            for (int i = 0; i < mags4.Length; i++)
+            {
+                var m = mags4[i];
+                if ((m.L3 >> 61) != 0) return false;   // stay below 2^254, inside the four-limb bound
+                m4[i] = new Magnitude256
+                {
+                    L3 = (m.L3 << 1) | (m.L2 >> 63), L2 = (m.L2 << 1) | (m.L1 >> 63), L1 = (m.L1 << 1) | (m.L0 >> 63), L0 = m.L0 << 1,
+                    Negative = m.Negative,
+                };
+            }
+            return true;
+        }
         if (c is System.Numerics.BigInteger[] bigs && doubled is System.Numerics.BigInteger[] b2)
         {
             for (int i = 0; i < bigs.Length; i++) b2[i] = bigs[i] << 1;

@@ -48,6 +48,10 @@ internal static partial class PolynomialMultiply
     /// <summary>Skips the multi-limb path on the current thread (tests compare it with big integers).</summary>
     [ThreadStatic] internal static bool ForceBig;
 
+    /// <summary>Skips the three-limb path on the current thread, so that the four-limb path takes every
+    /// multi-limb product and division (tests compare the two).</summary>
+    [ThreadStatic] internal static bool ForceFourLimbs;
+
     /// <summary>Dense is chosen only when the degree box has at most this many cells per term product.</summary>
     internal static double DenseBoxPerProduct = 2.0;
 
@@ -85,17 +89,41 @@ internal static partial class PolynomialMultiply
             }
             return;
         }
-        if (!ForceBig && CoefficientForm.TryIntegerMagnitudes(ca, out var ia) && CoefficientForm.TryIntegerMagnitudes(cb, out var ib))
+        if (!ForceBig)
         {
-            Run<Wide448Ops, Magnitude192, Int448>(ia, ea, ib, eb, in shape, square, BigInteger.One, out coeffs, out exps);
-            return;
+            // Integer coefficients: multi-limb magnitudes read straight from the rationals, three limbs up
+            // to 191 bits and four up to 255 (sums stay inside the 448- and 576-bit accumulators).
+            int bitsA = CoefficientForm.IntegerBits(ca), bitsB = bitsA < 0 ? -1 : CoefficientForm.IntegerBits(cb);
+            int bits = Math.Max(bitsA, bitsB);
+            if (bitsB >= 0)
+            {
+                if (bits <= Magnitude192.MaxBits && !ForceFourLimbs)
+                {
+                    CoefficientForm.TryIntegerMagnitudes<Magnitude192>(ca, out var ia);
+                    CoefficientForm.TryIntegerMagnitudes<Magnitude192>(cb, out var ib);
+                    Run<Wide448Ops, Magnitude192, Int448>(ia, ea, ib, eb, in shape, square, BigInteger.One, out coeffs, out exps);
+                    return;
+                }
+                if (bits <= Magnitude256.MaxBits)
+                {
+                    CoefficientForm.TryIntegerMagnitudes<Magnitude256>(ca, out var ia);
+                    CoefficientForm.TryIntegerMagnitudes<Magnitude256>(cb, out var ib);
+                    Run<Wide576Ops, Magnitude256, Int576>(ia, ea, ib, eb, in shape, square, BigInteger.One, out coeffs, out exps);
+                    return;
+                }
+            }
         }
         CoefficientForm.ToBig(ca, out var ba, out var bda);
         CoefficientForm.ToBig(cb, out var bb, out var bdb);
-        // Up to 191-bit numerators: multi-limb accumulation (sums stay below 2^447 for fewer than 2^64 products).
-        if (!ForceBig && CoefficientForm.TryMagnitudes(ba, out var ma) && CoefficientForm.TryMagnitudes(bb, out var mb))
+        // Rational coefficients: multi-limb numerators over the common denominators when they fit.
+        if (!ForceBig && !ForceFourLimbs && CoefficientForm.TryMagnitudes<Magnitude192>(ba, out var ma) && CoefficientForm.TryMagnitudes<Magnitude192>(bb, out var mb))
         {
             Run<Wide448Ops, Magnitude192, Int448>(ma, ea, mb, eb, in shape, square, bda * bdb, out coeffs, out exps);
+            return;
+        }
+        if (!ForceBig && CoefficientForm.TryMagnitudes<Magnitude256>(ba, out var na) && CoefficientForm.TryMagnitudes<Magnitude256>(bb, out var nb))
+        {
+            Run<Wide576Ops, Magnitude256, Int576>(na, ea, nb, eb, in shape, square, bda * bdb, out coeffs, out exps);
             return;
         }
         Run<BigOps, BigInteger, BigInteger>(ba, ea, bb, eb, in shape, square, bda * bdb, out coeffs, out exps);

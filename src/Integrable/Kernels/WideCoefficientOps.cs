@@ -1,13 +1,14 @@
 using System.Numerics;
 using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 using Integrable.Numbers;
 
 namespace Integrable.Kernels;
 
 /// <summary>A coefficient of at most 191 bits in sign–magnitude form (three 64-bit limbs and a sign): the
-/// input form of the multi-limb path, which takes over from the word paths when coefficients outgrow
+/// input form of the first multi-limb path, which takes over from the word paths when coefficients outgrow
 /// 63 bits (Somos-type iterates reach 100–200 bits) and keeps big integers out of the inner loops.</summary>
-internal struct Magnitude192
+internal struct Magnitude192 : IMagnitude<Magnitude192>
 {
     public ulong L0, L1, L2;
     public bool Negative;
@@ -15,47 +16,38 @@ internal struct Magnitude192
     /// <summary>The largest supported bit length of a magnitude.</summary>
     public const int MaxBits = 191;
 
+    static int IMagnitude<Magnitude192>.MaxBits => MaxBits;
+
     public static bool TryFrom(in BigInteger value, out Magnitude192 result)
     {
         result = default;
-        var abs = BigInteger.Abs(value);
-        if (abs.GetBitLength() > MaxBits) return false;
-        Span<byte> bytes = stackalloc byte[24];
-        bytes.Clear();
-        abs.TryWriteBytes(bytes, out _, isUnsigned: true, isBigEndian: false);
-        result.L0 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes);
-        result.L1 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[8..]);
-        result.L2 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[16..]);
+        if (!MultiLimb.TryWriteMagnitude(value, MaxBits, MemoryMarshal.CreateSpan(ref result.L0, 3))) return false;
         result.Negative = value.Sign < 0;
         return true;
     }
 
-    public readonly BigInteger ToBigInteger()
+    public static Magnitude192 FromWord(long value) => new() { L0 = MultiLimb.UnsignedAbs(value), Negative = value < 0 };
+
+    public readonly BigInteger ToBigInteger() => MultiLimb.FromMagnitude([L0, L1, L2], Negative);
+
+    public readonly bool TryGetWord(out long value)
     {
-        Span<byte> bytes = stackalloc byte[24];
-        System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes, L0);
-        System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes[8..], L1);
-        System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes[16..], L2);
-        var m = new BigInteger(bytes, isUnsigned: true, isBigEndian: false);
-        return Negative ? -m : m;
+        value = 0;
+        return (L1 | L2) == 0 && MultiLimb.TryWord(L0, Negative, out value);
     }
 }
 
 /// <summary>A signed 448-bit two's-complement accumulator (seven limbs): holds any sum of fewer than
-/// 2^64 products of two <see cref="Magnitude192"/> values plus a dividend below 2^446.</summary>
-internal struct Int448
+/// 2^63 products of two <see cref="Magnitude192"/> values plus a dividend of at most 446 bits.</summary>
+internal struct Int448 : IMultiLimbAccumulator<Int448>
 {
     public ulong W0, W1, W2, W3, W4, W5, W6;
 
     public readonly bool IsZero => (W0 | W1 | W2 | W3 | W4 | W5 | W6) == 0;
 
-    public readonly BigInteger ToBigInteger()
-    {
-        Span<byte> bytes = stackalloc byte[56];
-        var w = (ReadOnlySpan<ulong>)[W0, W1, W2, W3, W4, W5, W6];
-        for (int i = 0; i < 7; i++) System.Buffers.Binary.BinaryPrimitives.WriteUInt64LittleEndian(bytes[(8 * i)..], w[i]);
-        return new BigInteger(bytes, isUnsigned: false, isBigEndian: false);
-    }
+    public static int MaxDividendBits => 446;
+
+    public readonly BigInteger ToBigInteger() => MultiLimb.FromTwosComplement([W0, W1, W2, W3, W4, W5, W6]);
 
     /// <summary>The value in sign–magnitude form, or false when it needs more than 191 bits.</summary>
     public readonly bool TryToMagnitude(out Magnitude192 result)
@@ -75,22 +67,12 @@ internal struct Int448
         return true;
     }
 
-    /// <summary>The accumulator holding <paramref name="value"/>, or false when |value| ≥ 2^446.</summary>
+    /// <summary>The accumulator holding <paramref name="value"/>, or false when |value| has more than
+    /// <see cref="MaxDividendBits"/> bits.</summary>
     public static bool TryFrom(in BigInteger value, out Int448 result)
     {
         result = default;
-        if (BigInteger.Abs(value).GetBitLength() > 446) return false;
-        Span<byte> bytes = stackalloc byte[56];
-        bytes.Fill(value.Sign < 0 ? (byte)0xFF : (byte)0);
-        value.TryWriteBytes(bytes, out _, isUnsigned: false, isBigEndian: false);
-        result.W0 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes);
-        result.W1 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[8..]);
-        result.W2 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[16..]);
-        result.W3 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[24..]);
-        result.W4 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[32..]);
-        result.W5 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[40..]);
-        result.W6 = System.Buffers.Binary.BinaryPrimitives.ReadUInt64LittleEndian(bytes[48..]);
-        return true;
+        return MultiLimb.TryWriteTwosComplement(value, MaxDividendBits, MemoryMarshal.CreateSpan(ref result.W0, 7));
     }
 }
 
@@ -174,46 +156,12 @@ internal struct Wide448Ops : ICoefficientOps<Magnitude192, Int448>
         a.W6--;
     }
 
-    /// <summary>hi:lo = x·y + t + c (never overflows 128 bits).</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static ulong MulAddLimb(ulong x, ulong y, ulong t, ulong c, out ulong lo)
-    {
-        ulong hi = Math.BigMul(x, y, out ulong l);
-        l += t;
-        hi += l < t ? 1UL : 0UL;
-        l += c;
-        hi += l < c ? 1UL : 0UL;
-        lo = l;
-        return hi;
-    }
-
     /// <summary>The general product: schoolbook over two or three limbs per operand into six limbs, then one
     /// add or subtract with carry over all seven, written out so that every limb stays in a register.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void AccumulateWide(ref Int448 acc, in Magnitude192 a, in Magnitude192 b, bool subtract)
     {
-        ulong p0, p1, p2, p3, p4 = 0, p5 = 0;
-        if ((a.L2 | b.L2) == 0)
-        {
-            // 2×2 limbs.
-            ulong c = MulAddLimb(a.L0, b.L0, 0, 0, out p0);
-            p2 = MulAddLimb(a.L0, b.L1, 0, c, out p1);
-            c = MulAddLimb(a.L1, b.L0, p1, 0, out p1);
-            p3 = MulAddLimb(a.L1, b.L1, p2, c, out p2);
-        }
-        else
-        {
-            // 3×3 limbs, row by row.
-            ulong c = MulAddLimb(a.L0, b.L0, 0, 0, out p0);
-            c = MulAddLimb(a.L0, b.L1, 0, c, out p1);
-            p3 = MulAddLimb(a.L0, b.L2, 0, c, out p2);
-            c = MulAddLimb(a.L1, b.L0, p1, 0, out p1);
-            c = MulAddLimb(a.L1, b.L1, p2, c, out p2);
-            p4 = MulAddLimb(a.L1, b.L2, p3, c, out p3);
-            c = MulAddLimb(a.L2, b.L0, p2, 0, out p2);
-            c = MulAddLimb(a.L2, b.L1, p3, c, out p3);
-            p5 = MulAddLimb(a.L2, b.L2, p4, c, out p4);
-        }
+        MultiLimb.Product3(a.L0, a.L1, a.L2, b.L0, b.L1, b.L2, out ulong p0, out ulong p1, out ulong p2, out ulong p3, out ulong p4, out ulong p5);
         if (!subtract)
         {
             ulong s, k;
@@ -287,8 +235,6 @@ internal struct Wide448Ops : ICoefficientOps<Magnitude192, Int448>
             if (divisor.Negative && (quotient.L0 | quotient.L1 | quotient.L2) != 0) quotient.Negative = !quotient.Negative;
             return 0;
         }
-        var q = BigInteger.DivRem(acc.ToBigInteger(), divisor.ToBigInteger(), out var r);
-        if (!r.IsZero) return 1;
-        return Magnitude192.TryFrom(q, out quotient) ? 0 : 2;
+        return MultiLimb.TryDivideExact(acc.ToBigInteger(), divisor.ToBigInteger(), out quotient);
     }
 }

@@ -165,6 +165,62 @@ public class KernelDifferentialTests
             }, iter: FuzzSettings.Iterations(300), threads: 1);
     }
 
+    /// <summary>Coefficients of 150–262 bits around both multi-limb lines (191 bits for three limbs, 255 for
+    /// four), with the exact edge values 2^191 ± 1, 2^255 − 1 and 2^255.</summary>
+    private static readonly Gen<BigInteger> FourLimbCoefficient = Gen.Frequency(
+        (3, Gen.Int[-9, 9].Select(i => new BigInteger(i))),
+        (5, Gen.Select(Gen.Int[150, 262], Gen.Long.Array[5], Gen.Bool).Select((bits, limbs, neg) =>
+        {
+            var v = BigInteger.Zero;
+            foreach (var l in limbs) v = (v << 64) + new BigInteger((ulong)l);
+            v = (v & ((BigInteger.One << bits) - 1)) | (BigInteger.One << (bits - 1));
+            return neg ? -v : v;
+        })),
+        (1, Gen.OneOf((BigInteger.One << 191) + 1, -((BigInteger.One << 191) - 1), (BigInteger.One << 255) - 1,
+            -((BigInteger.One << 255) - 1), BigInteger.One << 255, (BigInteger.One << 254) + 3)));
+
+    /// <summary>The four-limb path (<see cref="Magnitude256"/> in <see cref="Int576"/>) against naive big-integer
+    /// products and the big-integer division: products, squares (doubled coefficients), exact quotients and a
+    /// non-divisible dividend, on every algorithm; half the cases pin four limbs even for small coefficients
+    /// (common practice: differential testing against a slow obvious reference).</summary>
+    [Theory]
+    [MemberData(nameof(Algorithms))]
+    public void MultiplyDivide_FourLimbCoefficients_MatchBigIntegerPath(string algorithm)
+    {
+        var force = Enum.Parse<MultiplyAlgorithm>(algorithm);
+        Gen.Int[1, 4].SelectMany(n => Gen.Select(Gen.Const(n),
+                Gen.Select(FourLimbCoefficient, Gen.Int[-2, 4].Array[n]).Array[1, 14].Select(Normalise),
+                Gen.Select(FourLimbCoefficient, Gen.Int[-1, 3].Array[n]).Array[1, 10].Select(Normalise), Gen.Bool))
+            .Sample((vars, a, b, pinFourLimbs) =>
+            {
+                if (a.Count == 0 || b.Count == 0) return;
+                var ring = RingOf(vars);
+                var pa = Build(ring, a);
+                var pb = Build(ring, b);
+                PolynomialMultiply.Force = force;
+                PolynomialMultiply.ForceFourLimbs = pinFourLimbs;
+                try
+                {
+                    var product = pa * pb;
+                    AssertSame(NaiveProduct(a, b), Read(product));
+                    AssertSame(NaiveProduct(b, b), Read(pb * pb));
+                    Assert.True(product.TryDivideExact(pb, out var q));
+                    AssertSame(a, Read(q));
+                    var off = product + ring.One;
+                    bool divides = off.TryDivideExact(pb, out var q2);
+                    PolynomialMultiply.ForceBig = true;
+                    Assert.Equal(divides, off.TryDivideExact(pb, out var q3));
+                    if (divides) Assert.Equal(q3, q2);
+                }
+                finally
+                {
+                    PolynomialMultiply.Force = MultiplyAlgorithm.Auto;
+                    PolynomialMultiply.ForceBig = false;
+                    PolynomialMultiply.ForceFourLimbs = false;
+                }
+            }, iter: FuzzSettings.Iterations(300), threads: 1);
+    }
+
     [Fact]
     public void Gcd_RandomCommonFactors_MatchesUnivariateEuclidOverQ()
     {

@@ -294,7 +294,7 @@ public sealed class PolynomialMultiplyHeapTests
                     // the longer operand as the heap rows: same output
                     Check(Kernel<Word192Ops, long, Int192>(true, pb, wb, pa, wa), Kernel<Word192Ops, long, Int192>(false, pa, wa, pb, wb), "Word192 swapped");
                 }
-                Assert.True(CoefficientForm.TryIntegerMagnitudes(a.Coefficients, out var ma) & CoefficientForm.TryIntegerMagnitudes(b.Coefficients, out var mb));
+                Assert.True(CoefficientForm.TryIntegerMagnitudes<Magnitude192>(a.Coefficients, out var ma) & CoefficientForm.TryIntegerMagnitudes<Magnitude192>(b.Coefficients, out var mb));
                 Check(Kernel<Wide448Ops, Magnitude192, Int448>(true, pa, ma, pb, mb), Kernel<Wide448Ops, Magnitude192, Int448>(false, pa, ma, pb, mb), "Wide448");
                 checkedPairs++;
             }

@@ -337,7 +337,11 @@ internal static partial class PolynomialDivide
     /// <returns>True with the quotient when B divides A; false otherwise.</returns>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryDivide(ReadOnlySpan<Rational> ca, int[] ea, ReadOnlySpan<Rational> cb, int[] eb,
-        int n, out Rational[] coeffs, out int[] exps)
+        int n, out Rational[] coeffs, out int[] exps) =>
+        TryDivide(ca, ea, cb, eb, n, project: !PolynomialMultiply.NoProjection && ForceDense is null, out coeffs, out exps);
+
+    private static bool TryDivide(ReadOnlySpan<Rational> ca, int[] ea, ReadOnlySpan<Rational> cb, int[] eb,
+        int n, bool project, out Rational[] coeffs, out int[] exps)
     {
         coeffs = [];
         exps = [];
@@ -361,6 +365,10 @@ internal static partial class PolynomialDivide
         if (!ShiftedDivides(ea[..n], minA, eb[..n], minB, qRange) ||
             !ShiftedDivides(ea[^n..], minA, eb[^n..], minB, qRange))
             return false;
+
+        if (project && n >= 2 && cb.Length >= 2 && (box > PolynomialMultiply.DenseMaxBox || box > DenseBoxPerTerm * ca.Length) &&
+            TryDivideProjected(ca, ea, cb, eb, n, out bool divides, out coeffs, out exps))
+            return divides;
 
         var ctx = new DivisionInput(ca, ea, cb, eb, n, minA, minB, qRange, offset, radix, box);
         // The dividend stays in words when it fits (widened to 128 bits only if a wider accumulator runs).
@@ -441,6 +449,33 @@ internal static partial class PolynomialDivide
         var result = new Rational[qb!.Length];
         for (int i = 0; i < result.Length; i++) result[i] = new Rational(qb[i]) * bigScale;
         return ctx.Finish(result, qeb, out coeffs, out exps);
+    }
+
+    /// <summary>Division on the pivot coordinates of the supports' affine hull (<see cref="SupportHull"/>) when
+    /// the operands are graded and the projected dividend is dense enough for the dense method; false when
+    /// that does not apply (then <paramref name="divides"/> is meaningless).</summary>
+    private static bool TryDivideProjected(ReadOnlySpan<Rational> ca, int[] ea, ReadOnlySpan<Rational> cb, int[] eb, int n,
+        out bool divides, out Rational[] coeffs, out int[] exps)
+    {
+        divides = false;
+        coeffs = [];
+        exps = [];
+        if (SupportHull.TryFind(ea, eb, n) is not { } hull) return false;
+        var pa = hull.Project(ea);
+        int r = hull.Rank;
+        ProductShape.MinMax(pa, r, out var min, out var max);
+        double box = 1;
+        for (int v = 0; v < r; v++) box *= (double)max[v] - min[v] + 1;
+        if (box > PolynomialMultiply.DenseMaxBox || box > DenseBoxPerTerm * ca.Length) return false;
+        SupportHull.Applied++;
+        divides = TryDivide(ca, pa, cb, hull.Project(eb), r, project: false, out coeffs, out var pq);
+        if (!divides) return true;
+        // The quotient's support lies in a0 − b0 + V; a lift that is not integral means no Laurent quotient.
+        var origin = new long[n];
+        for (int v = 0; v < n; v++) origin[v] = (long)ea[v] - eb[v];
+        divides = hull.TryLift(pq, origin, out exps);
+        if (!divides) coeffs = [];
+        return true;
     }
 
     /// <summary>Exact division on a multi-limb path: <see cref="DivideStatus.Exact"/> with the quotient,

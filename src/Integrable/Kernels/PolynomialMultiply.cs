@@ -76,6 +76,41 @@ internal static partial class PolynomialMultiply
         bool square = ca.Length == cb.Length && ea.Length == eb.Length &&
             Unsafe.AreSame(ref MemoryMarshal.GetReference(ea), ref MemoryMarshal.GetReference(eb)) &&
             Unsafe.AreSame(ref MemoryMarshal.GetReference(ca), ref MemoryMarshal.GetReference(cb));
+        if (WorthProjecting(in shape) && SupportHull.TryFind(ea, square ? [] : eb, nvars) is { } hull)
+        {
+            // Graded operands: their supports span a proper affine subspace; multiply on its pivot coordinates
+            // when that makes the product dense, then lift the exponents back.
+            var pa = hull.Project(ea);
+            var pb = square ? pa : hull.Project(eb);
+            var projected = new ProductShape(pa, pb, ca.Length, cb.Length, hull.Rank);
+            if (Choose(in projected) == MultiplyAlgorithm.Dense)
+            {
+                SupportHull.Applied++;
+                MultiplyShaped(ca, pa, cb, pb, in projected, square, out coeffs, out var pe);
+                var origin = new long[nvars];
+                for (int v = 0; v < nvars; v++) origin[v] = (long)ea[v] + eb[v];
+                if (!hull.TryLift(pe, origin, out exps))
+                    throw new OverflowException("A product exponent leaves the 32-bit range.");
+                return;
+            }
+        }
+        MultiplyShaped(ca, ea, cb, eb, in shape, square, out coeffs, out exps);
+    }
+
+    /// <summary>Skips the projection onto the affine hull of graded supports on the current thread (tests compare).</summary>
+    [ThreadStatic] internal static bool NoProjection;
+
+    /// <summary>True when the product would go to the heap only because its degree box is sparse, so that a
+    /// projection onto the supports' affine hull (<see cref="SupportHull"/>) could make it dense.</summary>
+    private static bool WorthProjecting(in ProductShape s) =>
+        !NoProjection && Force == MultiplyAlgorithm.Auto && s.Nvars >= 2 &&
+        Math.Min(s.CountA, s.CountB) >= DenseMinTerms && Choose(in s) == MultiplyAlgorithm.Heap;
+
+    /// <summary>The product with its shape known (<paramref name="square"/>: A and B are the same arrays).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void MultiplyShaped(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
+        in ProductShape shape, bool square, out Rational[] coeffs, out int[] exps)
+    {
         if (CoefficientForm.TryWords(ca, out var wa, out long da) && CoefficientForm.TryWords(cb, out var wb, out long db))
         {
             var den = (BigInteger)da * db;

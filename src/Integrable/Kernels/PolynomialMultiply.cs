@@ -111,6 +111,7 @@ internal static partial class PolynomialMultiply
     private static void MultiplyShaped(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
         in ProductShape shape, bool square, out Rational[] coeffs, out int[] exps)
     {
+        if (TryKronecker(ca, ea, cb, eb, in shape, square, out coeffs, out exps)) return;
         if (CoefficientForm.TryWords(ca, out var wa, out long da) && CoefficientForm.TryWords(cb, out var wb, out long db))
         {
             var den = (BigInteger)da * db;
@@ -164,6 +165,67 @@ internal static partial class PolynomialMultiply
         Run<BigOps, BigInteger, BigInteger>(ba, ea, bb, eb, in shape, square, bda * bdb, out coeffs, out exps);
     }
 
+    /// <summary>Dense products with integer coefficients of several words by Kronecker substitution and
+    /// multi-modular transforms (<see cref="KroneckerProduct"/>), when the dense method is chosen and the cost
+    /// estimate favours transforms.</summary>
+    private static bool TryKronecker(ReadOnlySpan<Rational> ca, ReadOnlySpan<int> ea, ReadOnlySpan<Rational> cb, ReadOnlySpan<int> eb,
+        in ProductShape s, bool square, out Rational[] coeffs, out int[] exps)
+    {
+        coeffs = [];
+        exps = [];
+        bool dense = KroneckerProduct.Force || (Force == MultiplyAlgorithm.Auto && Choose(in s) == MultiplyAlgorithm.Dense);
+        if (!dense || ForceBig || s.Box > 1L << KroneckerProduct.MaxLog) return false;
+        int bitsA = CoefficientForm.IntegerBits(ca), bitsB = square ? bitsA : CoefficientForm.IntegerBits(cb);
+        if (bitsA < 0 || bitsB < 0 || !KroneckerProduct.Worth(ca.Length, cb.Length, bitsA, bitsB, s.Box)) return false;
+        int n = s.Nvars;
+        var stride = Strides(in s);
+        var ia = new long[ca.Length];
+        Index(ea, n, s.MinA, stride, ia);
+        var ba = new BigInteger[ca.Length];
+        for (int i = 0; i < ba.Length; i++) ba[i] = ca[i].Numerator;
+        long[] ib = ia;
+        BigInteger[] bb = ba;
+        if (!square)
+        {
+            ib = new long[cb.Length];
+            Index(eb, n, s.MinB, stride, ib);
+            bb = new BigInteger[cb.Length];
+            for (int i = 0; i < bb.Length; i++) bb[i] = cb[i].Numerator;
+        }
+        int count = KroneckerProduct.Multiply(ba, ia, bb, ib, s.Box, square, bitsA, bitsB, out var oi, out var oc);
+        exps = Decode(oi, count, in s, stride);
+        coeffs = new Rational[count];
+        for (int t = 0; t < count; t++) coeffs[t] = new Rational(oc[t]);
+        return true;
+    }
+
+    /// <summary>Mixed-radix strides of the product's degree box, variable 0 most significant.</summary>
+    private static long[] Strides(in ProductShape s)
+    {
+        var stride = new long[s.Nvars];
+        long st = 1;
+        for (int v = s.Nvars - 1; v >= 0; v--) { stride[v] = st; st *= s.Radix[v]; }
+        return stride;
+    }
+
+    /// <summary>The exponents of product cells given by their mixed-radix indices.</summary>
+    private static int[] Decode(long[] oi, int count, in ProductShape s, long[] stride)
+    {
+        int n = s.Nvars;
+        var exps = new int[count * n];
+        for (int t = 0; t < count; t++)
+        {
+            long x = oi[t];
+            for (int v = 0; v < n; v++)
+            {
+                long digit = x / stride[v];
+                x -= digit * stride[v];
+                exps[t * n + v] = (int)(digit + (long)s.MinA[v] + s.MinB[v]);
+            }
+        }
+        return exps;
+    }
+
     /// <summary>The narrowest accumulator that holds every partial sum of a product coefficient
     /// (bound: <see cref="CoefficientBounds.ProductSumBits"/>); non-negative inputs get the unsigned
     /// variants, whose inner loops are shorter.</summary>
@@ -202,9 +264,7 @@ internal static partial class PolynomialMultiply
         // Dense needs per-window scratch proportional to Box / window: above DenseMaxBox use the heap even when forced.
         if (algorithm == MultiplyAlgorithm.Dense && s.Box <= DenseMaxBox)
         {
-            var stride = new long[n];
-            long st = 1;
-            for (int v = n - 1; v >= 0; v--) { stride[v] = st; st *= s.Radix[v]; }
+            var stride = Strides(in s);
             var ia = Pool.Rent<long>(ca.Length);
             var ib = Pool.Rent<long>(cb.Length);
             Index(ea, n, s.MinA, stride, ia);
@@ -216,17 +276,7 @@ internal static partial class PolynomialMultiply
             count = MultiplyDense<TOps, TC, TAcc>(ia.AsSpan(0, ca.Length), ca, ib.AsSpan(0, cb.Length), cb, window, aligned, ref oi, ref acc, doubled);
             Pool.Return(ia);
             Pool.Return(ib);
-            exps = new int[count * n];
-            for (int t = 0; t < count; t++)
-            {
-                long x = oi[t];
-                for (int v = 0; v < n; v++)
-                {
-                    long digit = x / stride[v];
-                    x -= digit * stride[v];
-                    exps[t * n + v] = (int)(digit + offset[v]);
-                }
-            }
+            exps = Decode(oi, count, in s, stride);
             Pool.Return(oi);
         }
         else

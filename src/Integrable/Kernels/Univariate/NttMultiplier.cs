@@ -97,7 +97,7 @@ internal sealed class NttMultiplier
     internal static int MaxLength = 1 << NttPrime.MaxLog;
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static uint FindPrimitiveRoot(uint p)
+    internal static uint FindPrimitiveRoot(uint p)
     {
         ulong n = p - 1;
         var factors = new List<ulong>();

@@ -370,6 +370,9 @@ internal static partial class PolynomialDivide
             TryDivideProjected(ca, ea, cb, eb, n, out bool divides, out coeffs, out exps))
             return divides;
 
+        if (TryDivideKronecker(ca, ea, cb, eb, n, minA, minB, qRange, radix, box, out bool kroneckerDivides, out coeffs, out exps))
+            return kroneckerDivides;
+
         var ctx = new DivisionInput(ca, ea, cb, eb, n, minA, minB, qRange, offset, radix, box);
         // The dividend stays in words when it fits (widened to 128 bits only if a wider accumulator runs).
         if (CoefficientForm.TryWords(cb, out var wb, out long db) && CoefficientForm.TryWide(ca, out var pWords, out var pw, out var dp))

@@ -1,0 +1,126 @@
+using System.Numerics;
+using Integrable.Kernels;
+using Integrable.Numbers;
+using Integrable.Polynomials;
+using Xunit;
+
+namespace Integrable.Tests.Kernels;
+
+/// <summary>Exact division by Kronecker substitution into Z[t] (<c>PolynomialDivide.TryDivideKronecker</c>)
+/// against naive products and the classical division kernels (common practice: differential testing).</summary>
+public class PolynomialDivideKroneckerTests
+{
+    private static int[] Key(string k) => [.. k.Split(',').Select(int.Parse)];
+
+    private static Dictionary<string, BigInteger> RandomPoly(Random rng, int vars, int terms, int range, int maxBits)
+    {
+        var d = new Dictionary<string, BigInteger>();
+        for (int t = 0; t < terms; t++)
+        {
+            string k = string.Join(",", Enumerable.Range(0, vars).Select(_ => rng.Next(-range / 2, range)));
+            int bits = rng.Next(1, maxBits + 1);
+            var bytes = new byte[bits / 8 + 2];
+            rng.NextBytes(bytes);
+            bytes[^1] = 0;
+            var c = (new BigInteger(bytes) & ((BigInteger.One << bits) - 1)) + 1;
+            d[k] = d.GetValueOrDefault(k) + (rng.Next(3) == 0 ? -c : c);
+        }
+        foreach (var k in d.Where(kv => kv.Value.IsZero).Select(kv => kv.Key).ToList()) d.Remove(k);
+        return d;
+    }
+
+    private static Dictionary<string, BigInteger> NaiveProduct(Dictionary<string, BigInteger> a, Dictionary<string, BigInteger> b)
+    {
+        var r = new Dictionary<string, BigInteger>();
+        foreach (var (ka, ca) in a)
+            foreach (var (kb, cb) in b)
+            {
+                string k = string.Join(",", Key(ka).Zip(Key(kb), (x, y) => x + y));
+                r[k] = r.GetValueOrDefault(k) + ca * cb;
+            }
+        foreach (var k in r.Where(kv => kv.Value.IsZero).Select(kv => kv.Key).ToList()) r.Remove(k);
+        return r;
+    }
+
+    private static LaurentPolynomial Build(LaurentPolynomialRing ring, Dictionary<string, BigInteger> terms, BigInteger? scale = null)
+    {
+        var b = ring.CreateBuilder();
+        foreach (var (k, c) in terms) b.Add(new Rational(c * (scale ?? BigInteger.One)), Key(k));
+        return b.ToPolynomial();
+    }
+
+    private static T Forced<T>(Func<T> f)
+    {
+        PolynomialDivide.ForceKronecker = true;
+        try { return f(); }
+        finally { PolynomialDivide.ForceKronecker = false; }
+    }
+
+    public static TheoryData<int, int, int> Shapes => new() { { 1, 1, 20 }, { 2, 2, 90 }, { 3, 2, 250 }, { 4, 3, 140 }, { 5, 1, 400 } };
+
+    /// <summary>A·B / B with divisors that are not primitive (content 6, or a negative leading coefficient): the
+    /// quotient must be A exactly, in canonical order, and equal to the classical kernel's; A·B + (monomial)
+    /// and A·B + B·(a term outside A's box) must be reported non-divisible by both.</summary>
+    [Theory]
+    [MemberData(nameof(Shapes))]
+    public void TryDivideExact_Forced_MatchesClassicalDivision(int seed, int vars, int maxBits)
+    {
+        var rng = new Random(seed);
+        var ring = new LaurentPolynomialRing([.. Enumerable.Range(0, vars).Select(i => $"x{i}")]);
+        int before = PolynomialDivide.KroneckerDivisions, cases = 0;
+        for (int it = 0; it < 10; it++)
+        {
+            int range = vars == 1 ? 40 : vars == 2 ? 10 : 5;
+            var a = RandomPoly(rng, vars, rng.Next(1, 40), range, maxBits);
+            var b = RandomPoly(rng, vars, rng.Next(2, 25), range, maxBits);
+            if (a.Count == 0 || b.Count < 2) continue;
+            cases++;
+            var pa = Build(ring, a);
+            var pb = Build(ring, b, it % 3 == 0 ? 6 : it % 3 == 1 ? -1 : 1);
+            var product = Build(ring, NaiveProduct(a, b), it % 3 == 0 ? 6 : it % 3 == 1 ? -1 : 1);
+            var q = Forced(() => product.TryDivideExact(pb, out var x) ? x : null);
+            Assert.NotNull(q);
+            Assert.True(q.IsCanonical());
+            Assert.Equal(pa, q);
+            var stray = product + ring.Monomial(Rational.One, [.. Enumerable.Range(0, vars).Select(_ => rng.Next(-range, range))]);
+            bool classical = stray.TryDivideExact(pb, out var qc);
+            Assert.Equal(classical, Forced(() => stray.TryDivideExact(pb, out var qk) && qk == qc));
+        }
+        Assert.True(PolynomialDivide.KroneckerDivisions - before >= cases, "the Kronecker division ran");
+    }
+
+    [Fact]
+    public void TryDivideExact_Forced_RationalQuotientOverContent()
+    {
+        // (x + 1)·(2x + 4) / (4x + 8) = (x + 1)/2: a rational quotient of integer polynomials.
+        var ring = new LaurentPolynomialRing("x");
+        var x = ring.Variable(0);
+        var dividend = (x + ring.One) * (2 * x + 4 * ring.One);
+        var divisor = 4 * x + 8 * ring.One;
+        Assert.True(Forced(() => dividend.TryDivideExact(divisor, out var q) ? q == (x + ring.One) * new Rational(1, 2) : false));
+    }
+
+    /// <summary>The automatic choice takes the Kronecker division for wide dense divisions: Somos-4 from x_0..x_3 has
+    /// coefficients past 126 bits from about the 30th term, and its iterates are Laurent polynomials whose values at
+    /// ones are OEIS A006720 (1, 1, 1, 1, 2, 3, 7, 23, 59, 314, …; the 15th term 7869898 from the OEIS entry, the 34th
+    /// through the integer recurrence).</summary>
+    [Fact]
+    public void SomosIterates_WideSteps_UseKroneckerDivision()
+    {
+        var ring = new LaurentPolynomialRing("x_0", "x_1", "x_2", "x_3");
+        var x = new List<LaurentPolynomial> { ring.Variable(0), ring.Variable(1), ring.Variable(2), ring.Variable(3) };
+        var ones = new List<BigInteger> { 1, 1, 1, 1 };
+        int before = PolynomialDivide.KroneckerDivisions;
+        for (int n = 4; n <= 33; n++)
+        {
+            Assert.True((x[n - 1] * x[n - 3] + x[n - 2] * x[n - 2]).TryDivideExact(x[n - 4], out var next));
+            x.Add(next);
+            ones.Add((ones[n - 1] * ones[n - 3] + ones[n - 2] * ones[n - 2]) / ones[n - 4]);
+        }
+        Assert.True(PolynomialDivide.KroneckerDivisions > before, "wide Somos divisions ran by Kronecker substitution");
+        var sum = Rational.Zero;
+        foreach (var c in x[33].Coefficients) sum += c;
+        Assert.Equal(new Rational(ones[33]), sum);
+        Assert.Equal(new Rational(7869898), x[14].Coefficients.ToArray().Aggregate(Rational.Zero, (s, c) => s + c));
+    }
+}

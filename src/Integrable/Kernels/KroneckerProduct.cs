@@ -96,6 +96,7 @@ internal static class KroneckerProduct
         if (!square) Load(cb, ib, primes, k, len, fb);
         for (int i = 0; i < k; i++)
         {
+            KernelCancellation.Poll();
             var p = primes[i];
             p.EnsureTables(log);
             var ra = fa.AsSpan(i * len, len);
@@ -169,6 +170,7 @@ internal static class KroneckerProduct
         var v = new ulong[limbsM + 1];
         for (int cell = cells - 1; cell >= 0; cell--)
         {
+            if ((cell & 4095) == 0) KernelCancellation.Poll();
             bool zero = true;
             for (int i = 0; i < k && zero; i++) zero = rows[i * len + cell] == 0;
             if (zero) continue;

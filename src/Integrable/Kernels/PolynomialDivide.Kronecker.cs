@@ -49,6 +49,7 @@ internal static partial class PolynomialDivide
         for (int t = 0; t < cb.Length; t++) b[Cell(eb.AsSpan(t * n, n), minB, stride)] = cb[t].Numerator / content;
 
         KroneckerDivisions++;
+        KernelCancellation.Poll();
         if (!IntegerPoly.TryDivideExact(a, b, out var q)) return true;
         int count = 0;
         foreach (var c in q) if (!c.IsZero) count++;

@@ -1,6 +1,7 @@
 using System.Numerics;
 using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
+using Integrable.Kernels.LinearAlgebra;
 using Integrable.Kernels.Univariate;
 
 namespace Integrable.Kernels;
@@ -157,7 +158,7 @@ internal static class KroneckerProduct
         int limbsM = 1;
         var m = new ulong[k + 1];
         m[0] = 1;
-        for (int i = 0; i < k; i++) limbsM = MulAddSmall(m, limbsM, primes[i].Q, 0);
+        for (int i = 0; i < k; i++) limbsM = WordArithmetic.MulWordAdd(m, limbsM, primes[i].Q, 0);
         var half = new ulong[limbsM];
         for (int w = limbsM - 1, carry = 0; w >= 0; w--)
         {
@@ -188,7 +189,7 @@ internal static class KroneckerProduct
             Array.Clear(v);
             v[0] = digits[k - 1];
             int used = 1;
-            for (int i = k - 2; i >= 0; i--) used = MulAddSmall(v, used, primes[i].Q, digits[i]);
+            for (int i = k - 2; i >= 0; i--) used = WordArithmetic.MulWordAdd(v, used, primes[i].Q, digits[i]);
             BigInteger value;
             if (Compare(v, half, limbsM) > 0)
             {
@@ -202,31 +203,15 @@ internal static class KroneckerProduct
                     borrow = (a < b || (a == b && borrow != 0)) ? 1UL : 0UL;
                     d[w] = r;
                 }
-                value = -new BigInteger(MemoryMarshal.AsBytes(d.AsSpan()), isUnsigned: true, isBigEndian: false);
+                value = WordArithmetic.ToBigInteger(d, negative: true);
             }
-            else value = new BigInteger(MemoryMarshal.AsBytes(v.AsSpan(0, limbsM)), isUnsigned: true, isBigEndian: false);
+            else value = WordArithmetic.ToBigInteger(v.AsSpan(0, limbsM), negative: false);
             outIdx.Add(cell);
             outCoef.Add(value);
         }
         indices = [.. outIdx];
         coefficients = [.. outCoef];
         return indices.Length;
-    }
-
-    /// <summary>x ← x·f + a over the first <paramref name="used"/> limbs; returns the new limb count.</summary>
-    private static int MulAddSmall(ulong[] x, int used, ulong f, ulong a)
-    {
-        ulong carry = a;
-        for (int w = 0; w < used; w++)
-        {
-            ulong hi = Math.BigMul(x[w], f, out ulong lo);
-            lo += carry;
-            hi += lo < carry ? 1UL : 0UL;
-            x[w] = lo;
-            carry = hi;
-        }
-        if (carry != 0) x[used++] = carry;
-        return used;
     }
 
     private static int Compare(ulong[] a, ulong[] b, int limbs)

@@ -55,6 +55,52 @@ internal static class MultiLimb
         return hi;
     }
 
+    /// <summary>(w0, w1) += (lo, hi); true when a carry leaves w1 (then <see cref="Increment"/> the limbs above).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static bool AddTwo(ref ulong w0, ref ulong w1, ulong lo, ulong hi)
+    {
+        ulong s0 = w0 + lo;
+        ulong c = s0 < lo ? 1UL : 0UL;
+        ulong t = w1 + hi;
+        ulong c1 = t < hi ? 1UL : 0UL;
+        ulong s1 = t + c;
+        c1 |= s1 < t ? 1UL : 0UL;
+        w0 = s0;
+        w1 = s1;
+        return c1 != 0;
+    }
+
+    /// <summary>(w0, w1) −= (lo, hi); true when a borrow leaves w1 (then <see cref="Decrement"/> the limbs above).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static bool SubtractTwo(ref ulong w0, ref ulong w1, ulong lo, ulong hi)
+    {
+        ulong s0 = w0 - lo;
+        ulong b = w0 < lo ? 1UL : 0UL;
+        ulong t = w1 - hi;
+        ulong b1 = w1 < hi ? 1UL : 0UL;
+        ulong s1 = t - b;
+        b1 |= t < b ? 1UL : 0UL;
+        w0 = s0;
+        w1 = s1;
+        return b1 != 0;
+    }
+
+    /// <summary>Adds one to the limbs (two's complement: a carry out of the top is dropped).</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    public static void Increment(Span<ulong> limbs)
+    {
+        for (int i = 0; i < limbs.Length; i++)
+            if (++limbs[i] != 0) return;
+    }
+
+    /// <summary>Subtracts one from the limbs (two's complement: a borrow out of the top is dropped).</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    public static void Decrement(Span<ulong> limbs)
+    {
+        for (int i = 0; i < limbs.Length; i++)
+            if (limbs[i]-- != 0) return;
+    }
+
     /// <summary>(p0…p5) = (a0, a1, a2)·(b0, b1, b2): four multiplications when both third limbs are
     /// zero, else nine, row by row, with every limb in a register.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
@@ -136,13 +182,6 @@ internal static class MultiLimb
         limbs.Fill(value.Sign < 0 ? ulong.MaxValue : 0UL);
         value.TryWriteBytes(MemoryMarshal.AsBytes(limbs), out _, isUnsigned: false, isBigEndian: false);
         return true;
-    }
-
-    /// <summary>The integer whose magnitude is <paramref name="limbs"/>, negated when asked.</summary>
-    public static BigInteger FromMagnitude(ReadOnlySpan<ulong> limbs, bool negative)
-    {
-        var m = new BigInteger(MemoryMarshal.AsBytes(limbs), isUnsigned: true, isBigEndian: false);
-        return negative ? -m : m;
     }
 
     /// <summary>The integer whose two's-complement form is <paramref name="limbs"/>.</summary>

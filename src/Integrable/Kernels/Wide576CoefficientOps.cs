@@ -28,7 +28,7 @@ internal struct Magnitude256 : IMagnitude<Magnitude256>
 
     public static Magnitude256 FromWord(long value) => new() { L0 = MultiLimb.UnsignedAbs(value), Negative = value < 0 };
 
-    public readonly BigInteger ToBigInteger() => MultiLimb.FromMagnitude([L0, L1, L2, L3], Negative);
+    public readonly BigInteger ToBigInteger() => Integrable.Kernels.LinearAlgebra.WordArithmetic.ToBigInteger([L0, L1, L2, L3], Negative);
 
     public readonly bool TryGetWord(out long value)
     {
@@ -106,53 +106,13 @@ internal struct Wide576Ops : ICoefficientOps<Magnitude256, Int576>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Add2(ref Int576 a, ulong lo, ulong hi)
     {
-        ulong s0 = a.W0 + lo;
-        ulong c = s0 < lo ? 1UL : 0UL;
-        ulong t = a.W1 + hi;
-        ulong c1 = t < hi ? 1UL : 0UL;
-        ulong s1 = t + c;
-        c1 |= s1 < t ? 1UL : 0UL;
-        a.W0 = s0;
-        a.W1 = s1;
-        if (c1 != 0) CarryFrom2(ref a);
+        if (MultiLimb.AddTwo(ref a.W0, ref a.W1, lo, hi)) MultiLimb.Increment(MemoryMarshal.CreateSpan(ref a.W2, 7));
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Sub2(ref Int576 a, ulong lo, ulong hi)
     {
-        ulong s0 = a.W0 - lo;
-        ulong b = a.W0 < lo ? 1UL : 0UL;
-        ulong t = a.W1 - hi;
-        ulong b1 = a.W1 < hi ? 1UL : 0UL;
-        ulong s1 = t - b;
-        b1 |= t < b ? 1UL : 0UL;
-        a.W0 = s0;
-        a.W1 = s1;
-        if (b1 != 0) BorrowFrom2(ref a);
-    }
-
-    [MethodImpl(MethodImplOptions.NoInlining)]
-    private static void CarryFrom2(ref Int576 a)
-    {
-        if (++a.W2 != 0) return;
-        if (++a.W3 != 0) return;
-        if (++a.W4 != 0) return;
-        if (++a.W5 != 0) return;
-        if (++a.W6 != 0) return;
-        if (++a.W7 != 0) return;
-        ++a.W8;
-    }
-
-    [MethodImpl(MethodImplOptions.NoInlining)]
-    private static void BorrowFrom2(ref Int576 a)
-    {
-        if (a.W2-- != 0) return;
-        if (a.W3-- != 0) return;
-        if (a.W4-- != 0) return;
-        if (a.W5-- != 0) return;
-        if (a.W6-- != 0) return;
-        if (a.W7-- != 0) return;
-        a.W8--;
+        if (MultiLimb.SubtractTwo(ref a.W0, ref a.W1, lo, hi)) MultiLimb.Decrement(MemoryMarshal.CreateSpan(ref a.W2, 7));
     }
 
     /// <summary>The general product into eight limbs, then one add or subtract with carry over all nine.</summary>

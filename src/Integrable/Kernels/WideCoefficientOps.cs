@@ -28,7 +28,7 @@ internal struct Magnitude192 : IMagnitude<Magnitude192>
 
     public static Magnitude192 FromWord(long value) => new() { L0 = MultiLimb.UnsignedAbs(value), Negative = value < 0 };
 
-    public readonly BigInteger ToBigInteger() => MultiLimb.FromMagnitude([L0, L1, L2], Negative);
+    public readonly BigInteger ToBigInteger() => Integrable.Kernels.LinearAlgebra.WordArithmetic.ToBigInteger([L0, L1, L2], Negative);
 
     public readonly bool TryGetWord(out long value)
     {
@@ -111,49 +111,13 @@ internal struct Wide448Ops : ICoefficientOps<Magnitude192, Int448>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Add2(ref Int448 a, ulong lo, ulong hi)
     {
-        ulong s0 = a.W0 + lo;
-        ulong c = s0 < lo ? 1UL : 0UL;
-        ulong t = a.W1 + hi;
-        ulong c1 = t < hi ? 1UL : 0UL;
-        ulong s1 = t + c;
-        c1 |= s1 < t ? 1UL : 0UL;
-        a.W0 = s0;
-        a.W1 = s1;
-        if (c1 != 0) CarryFrom2(ref a);
+        if (MultiLimb.AddTwo(ref a.W0, ref a.W1, lo, hi)) MultiLimb.Increment(MemoryMarshal.CreateSpan(ref a.W2, 5));
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Sub2(ref Int448 a, ulong lo, ulong hi)
     {
-        ulong s0 = a.W0 - lo;
-        ulong b = a.W0 < lo ? 1UL : 0UL;
-        ulong t = a.W1 - hi;
-        ulong b1 = a.W1 < hi ? 1UL : 0UL;
-        ulong s1 = t - b;
-        b1 |= t < b ? 1UL : 0UL;
-        a.W0 = s0;
-        a.W1 = s1;
-        if (b1 != 0) BorrowFrom2(ref a);
-    }
-
-    [MethodImpl(MethodImplOptions.NoInlining)]
-    private static void CarryFrom2(ref Int448 a)
-    {
-        if (++a.W2 != 0) return;
-        if (++a.W3 != 0) return;
-        if (++a.W4 != 0) return;
-        if (++a.W5 != 0) return;
-        ++a.W6;
-    }
-
-    [MethodImpl(MethodImplOptions.NoInlining)]
-    private static void BorrowFrom2(ref Int448 a)
-    {
-        if (a.W2-- != 0) return;
-        if (a.W3-- != 0) return;
-        if (a.W4-- != 0) return;
-        if (a.W5-- != 0) return;
-        a.W6--;
+        if (MultiLimb.SubtractTwo(ref a.W0, ref a.W1, lo, hi)) MultiLimb.Decrement(MemoryMarshal.CreateSpan(ref a.W2, 5));
     }
 
     /// <summary>The general product: schoolbook over two or three limbs per operand into six limbs, then one

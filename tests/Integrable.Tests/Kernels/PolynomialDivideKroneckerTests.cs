@@ -3,6 +3,7 @@ using Integrable.Kernels;
 using Integrable.Numbers;
 using Integrable.Polynomials;
 using Xunit;
+using static Integrable.Tests.Kernels.SparseReference;
 
 namespace Integrable.Tests.Kernels;
 
@@ -10,43 +11,15 @@ namespace Integrable.Tests.Kernels;
 /// against naive products and the classical division kernels (common practice: differential testing).</summary>
 public class PolynomialDivideKroneckerTests
 {
-    private static int[] Key(string k) => [.. k.Split(',').Select(int.Parse)];
-
     private static Dictionary<string, BigInteger> RandomPoly(Random rng, int vars, int terms, int range, int maxBits)
     {
         var d = new Dictionary<string, BigInteger>();
         for (int t = 0; t < terms; t++)
         {
             string k = string.Join(",", Enumerable.Range(0, vars).Select(_ => rng.Next(-range / 2, range)));
-            int bits = rng.Next(1, maxBits + 1);
-            var bytes = new byte[bits / 8 + 2];
-            rng.NextBytes(bytes);
-            bytes[^1] = 0;
-            var c = (new BigInteger(bytes) & ((BigInteger.One << bits) - 1)) + 1;
-            d[k] = d.GetValueOrDefault(k) + (rng.Next(3) == 0 ? -c : c);
+            d[k] = d.GetValueOrDefault(k) + RandomInteger(rng, maxBits);
         }
-        foreach (var k in d.Where(kv => kv.Value.IsZero).Select(kv => kv.Key).ToList()) d.Remove(k);
-        return d;
-    }
-
-    private static Dictionary<string, BigInteger> NaiveProduct(Dictionary<string, BigInteger> a, Dictionary<string, BigInteger> b)
-    {
-        var r = new Dictionary<string, BigInteger>();
-        foreach (var (ka, ca) in a)
-            foreach (var (kb, cb) in b)
-            {
-                string k = string.Join(",", Key(ka).Zip(Key(kb), (x, y) => x + y));
-                r[k] = r.GetValueOrDefault(k) + ca * cb;
-            }
-        foreach (var k in r.Where(kv => kv.Value.IsZero).Select(kv => kv.Key).ToList()) r.Remove(k);
-        return r;
-    }
-
-    private static LaurentPolynomial Build(LaurentPolynomialRing ring, Dictionary<string, BigInteger> terms, BigInteger? scale = null)
-    {
-        var b = ring.CreateBuilder();
-        foreach (var (k, c) in terms) b.Add(new Rational(c * (scale ?? BigInteger.One)), Key(k));
-        return b.ToPolynomial();
+        return Normalise(d);
     }
 
     private static T Forced<T>(Func<T> f)

@@ -3,6 +3,7 @@ using Integrable.Kernels;
 using Integrable.Numbers;
 using Integrable.Polynomials;
 using Xunit;
+using static Integrable.Tests.Kernels.SparseReference;
 
 namespace Integrable.Tests.Kernels;
 
@@ -83,37 +84,7 @@ public class SupportHullTests
             string key = string.Join(",", e);
             d[key] = d.GetValueOrDefault(key) + coefficient;
         }
-        foreach (var k in d.Where(kv => kv.Value.IsZero).Select(kv => kv.Key).ToList()) d.Remove(k);
-        return d;
-    }
-
-    private static int[] Key(string k) => [.. k.Split(',').Select(int.Parse)];
-
-    private static Dictionary<string, BigInteger> NaiveProduct(Dictionary<string, BigInteger> a, Dictionary<string, BigInteger> b)
-    {
-        var r = new Dictionary<string, BigInteger>();
-        foreach (var (ka, ca) in a)
-            foreach (var (kb, cb) in b)
-            {
-                string k = string.Join(",", Key(ka).Zip(Key(kb), (x, y) => x + y));
-                r[k] = r.GetValueOrDefault(k) + ca * cb;
-            }
-        foreach (var k in r.Where(kv => kv.Value.IsZero).Select(kv => kv.Key).ToList()) r.Remove(k);
-        return r;
-    }
-
-    private static LaurentPolynomial Build(LaurentPolynomialRing ring, Dictionary<string, BigInteger> terms)
-    {
-        var b = ring.CreateBuilder();
-        foreach (var (k, c) in terms) b.Add(new Rational(c), Key(k));
-        return b.ToPolynomial();
-    }
-
-    private static Dictionary<string, BigInteger> Read(LaurentPolynomial p)
-    {
-        var d = new Dictionary<string, BigInteger>();
-        foreach (var t in p.Terms) d[string.Join(",", t.Exponents.ToArray())] = t.Coefficient.Numerator;
-        return d;
+        return Normalise(d);
     }
 
     private static int[] Support(LaurentPolynomial p)
@@ -121,14 +92,6 @@ public class SupportHullTests
         var e = new List<int>();
         foreach (var t in p.Terms) e.AddRange(t.Exponents.ToArray());
         return [.. e];
-    }
-
-    private static void AssertSame(Dictionary<string, BigInteger> expected, LaurentPolynomial actual)
-    {
-        Assert.True(actual.IsCanonical(), "canonical (descending lex) order after lifting");
-        var got = Read(actual);
-        Assert.Equal(expected.Count, got.Count);
-        foreach (var (k, c) in expected) Assert.Equal(c, got.GetValueOrDefault(k));
     }
 
     public static TheoryData<int, bool> Cases => new() { { 1, false }, { 2, false }, { 3, true }, { 4, true } };

@@ -75,20 +75,7 @@ internal sealed class MixedRadixAccumulator
         var w = new ulong[k + 1];
         int len = 1;
         w[0] = d[k - 1];
-        for (int j = k - 2; j >= 0; j--)
-        {
-            ulong carry = d[j];
-            ulong pj = _primes[j];
-            for (int t = 0; t < len; t++)
-            {
-                ulong hi = Math.BigMul(w[t], pj, out ulong lo);
-                lo += carry;
-                hi += lo < carry ? 1UL : 0UL;
-                w[t] = lo;
-                carry = hi;
-            }
-            if (carry != 0) w[len++] = carry;
-        }
+        for (int j = k - 2; j >= 0; j--) len = WordArithmetic.MulWordAdd(w, len, _primes[j], d[j]);
         return WordArithmetic.ToBigInteger(w.AsSpan(0, len), false);
     }
 

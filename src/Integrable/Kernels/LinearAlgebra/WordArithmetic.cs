@@ -38,6 +38,24 @@ internal static class WordArithmetic
         return negative ? -v : v;
     }
 
+    /// <summary>x ← x·factor + addend over the first <paramref name="used"/> words (Horner step of a mixed-radix
+    /// reconstruction); x must have room for one more word. Returns the new word count.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static int MulWordAdd(Span<ulong> x, int used, ulong factor, ulong addend)
+    {
+        ulong carry = addend;
+        for (int t = 0; t < used; t++)
+        {
+            ulong hi = Math.BigMul(x[t], factor, out ulong lo);
+            lo += carry;
+            hi += lo < carry ? 1UL : 0UL;
+            x[t] = lo;
+            carry = hi;
+        }
+        if (carry != 0) x[used++] = carry;
+        return used;
+    }
+
     /// <summary>acc += x·y (schoolbook). <paramref name="acc"/> must have room for the result; the
     /// carry out of its top word is lost, so callers size it generously.</summary>
     /// <remarks>One word of y per pass: without an add-with-carry intrinsic the JIT compiles a two-word

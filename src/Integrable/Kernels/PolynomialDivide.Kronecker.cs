@@ -35,7 +35,7 @@ internal static partial class PolynomialDivide
         if (!ForceKronecker && (ForceDense is not null || box > DenseBoxPerTerm * ca.Length)) return false;
         int bitsA = CoefficientForm.IntegerBits(ca), bitsB = CoefficientForm.IntegerBits(cb);
         if (bitsA < 0 || bitsB < 0) return false;
-        if (!ForceKronecker && (Math.Max(bitsA, bitsB) <= 126 || !KroneckerProduct.Worth(ca.Length, cb.Length, bitsA, bitsB, box))) return false;
+        if (!ForceKronecker && (Math.Max(bitsA, bitsB) <= 63 || !KroneckerProduct.Worth(ca.Length, cb.Length, bitsA, bitsB, box))) return false;
 
         var stride = new long[n];
         long st = 1;

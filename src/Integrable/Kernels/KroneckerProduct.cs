@@ -53,9 +53,9 @@ internal static class KroneckerProduct
         return 0;
     }
 
-    /// <summary>Forces this method for every dense product on the current thread (tests); false lets the cost
-    /// estimate decide.</summary>
-    [ThreadStatic] internal static bool Force;
+    /// <summary>On the current thread: true forces this method for every product whose box allows it, false
+    /// turns it off, null (the default) lets the cost estimate decide (tests and benchmarks).</summary>
+    [ThreadStatic] internal static bool? Force;
 
     /// <summary>Whether the transform method is expected to beat the classical dense method for #A·#B products
     /// with coefficients of <paramref name="bitsA"/> and <paramref name="bitsB"/> bits into a product box of
@@ -68,7 +68,7 @@ internal static class KroneckerProduct
         int bits = BoundBits(countA, countB, bitsA, bitsB);
         int k = PrimesFor(bits);
         if (k == 0) return false;
-        if (Force) return true;
+        if (Force is { } forced) return forced;
         double len = BitOperations.RoundUpToPowerOf2((ulong)cells);
         double transform = k * len * (1.5 * Math.Log2(len) + 1 + 0.5 * k);
         double classical = (double)countA * countB * Math.Max(1, (bitsA + 31) / 32) * Math.Max(1, (bitsB + 31) / 32);

@@ -366,7 +366,9 @@ internal static partial class PolynomialDivide
             !ShiftedDivides(ea[^n..], minA, eb[^n..], minB, qRange))
             return false;
 
+        // The hull costs up to (#A + #B)·n² word operations: tried only when that is small against the division.
         if (project && n >= 2 && cb.Length >= 2 && (box > PolynomialMultiply.DenseMaxBox || box > DenseBoxPerTerm * ca.Length) &&
+            ((double)ca.Length + cb.Length) * n * n <= (double)ca.Length * cb.Length &&
             TryDivideProjected(ca, ea, cb, eb, n, out bool divides, out coeffs, out exps))
             return divides;
 

@@ -102,9 +102,12 @@ internal static partial class PolynomialMultiply
 
     /// <summary>True when the product would go to the heap only because its degree box is sparse, so that a
     /// projection onto the supports' affine hull (<see cref="SupportHull"/>) could make it dense.</summary>
+    /// <remarks>Finding the hull costs up to (#A + #B)·n² word operations, so it is tried only when that is
+    /// small against the #A·#B products of the heap.</remarks>
     private static bool WorthProjecting(in ProductShape s) =>
         !NoProjection && Force == MultiplyAlgorithm.Auto && s.Nvars >= 2 &&
-        Math.Min(s.CountA, s.CountB) >= DenseMinTerms && Choose(in s) == MultiplyAlgorithm.Heap;
+        Math.Min(s.CountA, s.CountB) >= DenseMinTerms && Choose(in s) == MultiplyAlgorithm.Heap &&
+        ((double)s.CountA + s.CountB) * s.Nvars * s.Nvars <= (double)s.CountA * s.CountB;
 
     /// <summary>The product with its shape known (<paramref name="square"/>: A and B are the same arrays).</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
@@ -173,7 +176,7 @@ internal static partial class PolynomialMultiply
     {
         coeffs = [];
         exps = [];
-        bool dense = KroneckerProduct.Force || (Force == MultiplyAlgorithm.Auto && Choose(in s) == MultiplyAlgorithm.Dense);
+        bool dense = KroneckerProduct.Force == true || (Force == MultiplyAlgorithm.Auto && Choose(in s) == MultiplyAlgorithm.Dense);
         if (!dense || ForceBig || s.Box > 1L << KroneckerProduct.MaxLog) return false;
         int bitsA = CoefficientForm.IntegerBits(ca), bitsB = square ? bitsA : CoefficientForm.IntegerBits(cb);
         if (bitsA < 0 || bitsB < 0 || !KroneckerProduct.Worth(ca.Length, cb.Length, bitsA, bitsB, s.Box)) return false;

@@ -114,8 +114,8 @@ public class SupportHullTests
             var dirs = new int[r][];
             for (int i = 0; i < r; i++) dirs[i] = [.. Enumerable.Range(0, n).Select(_ => rng.Next(-3, 4))];
             int[] Base() => [.. Enumerable.Range(0, n).Select(_ => rng.Next(-20, 21))];
-            var a = Graded(rng, Base(), dirs, rng.Next(60, 140), 12, wide);
-            var b = Graded(rng, Base(), dirs, rng.Next(40, 90), 9, wide);
+            var a = Graded(rng, Base(), dirs, rng.Next(80, 160), 12, wide);
+            var b = Graded(rng, Base(), dirs, rng.Next(60, 110), 10, wide);
             if (a.Count < 16 || b.Count < 16) continue;
             checkedCases++;
             var pa = Build(ring, a);

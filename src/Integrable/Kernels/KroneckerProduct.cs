@@ -111,12 +111,22 @@ internal static class KroneckerProduct
             }
             p.Inverse(ra);
         }
-        return Reconstruct(fa, primes, k, len, (int)cells, out indices, out coefficients);
+        // len⁻¹·R² in Montgomery form: MontMul(x, ·) undoes the transforms' factor len·R⁻¹.
+        var scale = new uint[k];
+        for (int i = 0; i < k; i++)
+        {
+            var p = primes[i];
+            scale[i] = p.ToMont(p.ToMont(p.PowMod((uint)(len % p.Q), p.Q - 2)));
+        }
+        return Reconstruct(fa, primes, k, len, (int)cells, scale, out indices, out coefficients);
     }
+
+    /// <summary>The transform primes, largest first.</summary>
+    internal static NttPrime[] TransformPrimes => LazyPrimes.Value;
 
     /// <summary>Residues of every coefficient modulo the first k primes, placed at the coefficient's cell.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void Load(ReadOnlySpan<BigInteger> c, ReadOnlySpan<long> idx, NttPrime[] primes, int k, int len, uint[] rows)
+    internal static void Load(ReadOnlySpan<BigInteger> c, ReadOnlySpan<long> idx, NttPrime[] primes, int k, int len, uint[] rows)
     {
         Span<ulong> limbs = stackalloc ulong[64];
         for (int t = 0; t < c.Length; t++)
@@ -141,17 +151,15 @@ internal static class KroneckerProduct
         }
     }
 
-    /// <summary>Garner's mixed-radix digits and the symmetric integer of every non-zero cell, highest first.</summary>
+    /// <summary>Garner's mixed-radix digits and the symmetric integer of every non-zero cell, highest first; row i
+    /// holds values modulo q_i that MontMul(·, scale_i) turns into residues.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static int Reconstruct(uint[] rows, NttPrime[] primes, int k, int len, int cells, out long[] indices, out BigInteger[] coefficients)
+    internal static int Reconstruct(uint[] rows, NttPrime[] primes, int k, int len, int cells, uint[] scale, out long[] indices, out BigInteger[] coefficients)
     {
-        // scale_i = len⁻¹·R² (Montgomery form), so MontMul(x, scale_i) undoes the transform's factor len·R⁻¹.
-        var scale = new uint[k];
         var inv = new uint[k * k];   // inv[i·k + j] = q_j⁻¹·R mod q_i (Montgomery form), j < i
         for (int i = 0; i < k; i++)
         {
             var p = primes[i];
-            scale[i] = p.ToMont(p.ToMont(p.PowMod((uint)(len % p.Q), p.Q - 2)));
             for (int j = 0; j < i; j++) inv[i * k + j] = p.ToMont(p.PowMod(primes[j].Q % p.Q, p.Q - 2));
         }
         // M = Π q_i and ⌊M/2⌋ as limbs; the value v = Σ d_i·(q_0⋯q_{i−1}) lies in [0, M).

@@ -50,7 +50,9 @@ internal static partial class PolynomialDivide
 
         KroneckerDivisions++;
         KernelCancellation.Poll();
-        if (!IntegerPoly.TryDivideExact(a, b, out var q)) return true;
+        // A guessed number of primes and a check by multiplication first; undecided cases go to the modular
+        // division with verification, which needs no guess.
+        if (!KroneckerQuotient.TryDivide(a, b, bitsA, bitsB, out var q) && !IntegerPoly.TryDivideExact(a, b, out q)) return true;
         int count = 0;
         foreach (var c in q) if (!c.IsZero) count++;
         coeffs = new Rational[count];

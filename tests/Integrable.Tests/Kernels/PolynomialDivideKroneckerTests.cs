@@ -96,4 +96,74 @@ public class PolynomialDivideKroneckerTests
         Assert.Equal(new Rational(ones[33]), sum);
         Assert.Equal(new Rational(7869898), x[14].Coefficients.ToArray().Aggregate(Rational.Zero, (s, c) => s + c));
     }
+
+    private static BigInteger[] Dense(Random rng, int length, int maxBits)
+    {
+        var d = new BigInteger[length];
+        for (int i = 0; i < length; i++) d[i] = rng.Next(4) == 0 ? BigInteger.Zero : RandomInteger(rng, maxBits);
+        d[^1] = RandomInteger(rng, maxBits);
+        return d;
+    }
+
+    private static BigInteger[] Times(BigInteger[] a, BigInteger[] b)
+    {
+        var r = new BigInteger[a.Length + b.Length - 1];
+        for (int i = 0; i < a.Length; i++)
+            for (int j = 0; j < b.Length; j++) r[i + j] += a[i] * b[j];
+        return r;
+    }
+
+    private static int Bits(BigInteger[] a) => a.Max(x => (int)BigInteger.Abs(x).GetBitLength());
+
+    /// <summary>Univariate quotients by Newton inversion modulo the transform primes: exact products are divided back
+    /// to the factor, and the answer is counted; a perturbed dividend, a quotient larger than the guessed size (the
+    /// margin made negative) and a leading coefficient divisible by the first prime are left undecided, never answered
+    /// wrongly; the division with verification then decides them (common practice: checks against schoolbook products).</summary>
+    [Fact]
+    public void KroneckerQuotient_DividesBackOrLeavesUndecided()
+    {
+        var rng = new Random(11);
+        for (int it = 0; it < 12; it++)
+        {
+            var q = Dense(rng, rng.Next(1, 300), 200);
+            var b = Dense(rng, rng.Next(2, 120), 150);
+            var a = Times(q, b);
+            int before = KroneckerQuotient.Answered;
+            Assert.True(KroneckerQuotient.TryDivide(a, b, Bits(a), Bits(b), out var got));
+            Assert.Equal(q, got);
+            Assert.Equal(before + 1, KroneckerQuotient.Answered);
+            var perturbed = (BigInteger[])a.Clone();
+            perturbed[rng.Next(perturbed.Length - 1)] += 1;
+            Assert.False(KroneckerQuotient.TryDivide(perturbed, b, Bits(perturbed), Bits(b), out _));
+            Assert.False(Integrable.Kernels.Univariate.IntegerPoly.TryDivideExact(perturbed, b, out _));
+        }
+        // The guess too small: the reconstruction is wrong and the check refuses it.
+        var q2 = Dense(rng, 50, 300);
+        var b2 = Dense(rng, 10, 20);
+        var a2 = Times(q2, b2);
+        int saved = KroneckerQuotient.GuessMarginBits;
+        KroneckerQuotient.GuessMarginBits = -Bits(a2) + 40;
+        try { Assert.False(KroneckerQuotient.TryDivide(a2, b2, Bits(a2), Bits(b2), out _)); }
+        finally { KroneckerQuotient.GuessMarginBits = saved; }
+        // The first transform prime divides lc(b): undecided.
+        var b3 = Dense(rng, 10, 40);
+        b3[^1] = KroneckerProduct.TransformPrimes[0].Q;
+        Assert.False(KroneckerQuotient.TryDivide(Times(q2, b3), b3, Bits(Times(q2, b3)), Bits(b3), out _));
+    }
+
+    [Fact]
+    public void TryDivideExact_Forced_GuessTooSmall_FallsBackToVerifiedDivision()
+    {
+        var rng = new Random(12);
+        var ring = new LaurentPolynomialRing("x", "y");
+        var a = RandomPoly(rng, 2, 30, 8, 300);
+        var b = RandomPoly(rng, 2, 12, 8, 30);
+        var pa = Build(ring, a);
+        var pb = Build(ring, b);
+        var product = Build(ring, NaiveProduct(a, b));
+        int saved = KroneckerQuotient.GuessMarginBits;
+        KroneckerQuotient.GuessMarginBits = -250;
+        try { Assert.Equal(pa, Forced(() => product.TryDivideExact(pb, out var q) ? q : null)); }
+        finally { KroneckerQuotient.GuessMarginBits = saved; }
+    }
 }

@@ -12,17 +12,6 @@ namespace Integrable.Tests.Kernels;
 /// slow obvious reference).</summary>
 public class KroneckerProductTests
 {
-    private static Dictionary<string, BigInteger> Random(Random rng, int vars, int terms, int range, int maxBits)
-    {
-        var d = new Dictionary<string, BigInteger>();
-        for (int t = 0; t < terms; t++)
-        {
-            string k = string.Join(",", Enumerable.Range(0, vars).Select(_ => rng.Next(-range / 3, range)));
-            d[k] = d.GetValueOrDefault(k) + SparseReference.RandomInteger(rng, maxBits);
-        }
-        return SparseReference.Normalise(d);
-    }
-
     private static T Forced<T>(Func<T> f, bool on = true)
     {
         KroneckerProduct.Force = on;
@@ -46,8 +35,8 @@ public class KroneckerProductTests
         for (int it = 0; it < 8; it++)
         {
             int range = vars == 1 ? 60 : vars == 2 ? 14 : 6;
-            var a = Random(rng, vars, rng.Next(1, 50), range, maxBits);
-            var b = Random(rng, vars, rng.Next(1, 50), range, maxBits);
+            var a = RandomPolynomial(rng, vars, rng.Next(1, 50), -range / 3, range, maxBits);
+            var b = RandomPolynomial(rng, vars, rng.Next(1, 50), -range / 3, range, maxBits);
             if (a.Count == 0 || b.Count == 0) continue;
             var pa = Build(ring, a);
             var pb = Build(ring, b);

@@ -63,4 +63,17 @@ internal static class SparseReference
         var v = (new BigInteger(bytes) & ((BigInteger.One << bits) - 1)) | (BigInteger.One << (bits - 1));
         return rng.Next(2) == 0 ? -v : v;
     }
+
+    /// <summary>A random polynomial: up to <paramref name="terms"/> terms with exponents in [low, high) and
+    /// coefficients of up to <paramref name="maxBits"/> bits.</summary>
+    public static Dictionary<string, BigInteger> RandomPolynomial(Random rng, int vars, int terms, int low, int high, int maxBits)
+    {
+        var d = new Dictionary<string, BigInteger>();
+        for (int t = 0; t < terms; t++)
+        {
+            string k = string.Join(",", Enumerable.Range(0, vars).Select(_ => rng.Next(low, high)));
+            d[k] = d.GetValueOrDefault(k) + RandomInteger(rng, maxBits);
+        }
+        return Normalise(d);
+    }
 }

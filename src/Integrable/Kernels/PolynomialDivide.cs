@@ -328,12 +328,15 @@ internal static partial class PolynomialDivide
     /// monomial). Both are first divided by their monomial content (per-variable minimum exponents),
     /// which makes them polynomials not divisible by any variable; then A/B is a Laurent polynomial
     /// iff B₀ divides A₀ as polynomials, and the quotient is x^(minA − minB)·A₀/B₀.</summary>
-    /// <remarks>Dispatch: the divisor is made primitive with word coefficients and the dividend put
-    /// in 128-bit form when possible; then dense division (<see cref="DivideDense"/>) when the
-    /// dividend's degree box has aligned windows and at most <see cref="DenseBoxPerTerm"/> cells per
-    /// dividend term, else heap division; with 64-, then 128-, then 192-bit accumulators (each attempt
-    /// stops with <see cref="DivideStatus.TooLarge"/> as soon as its bound could be exceeded), and big
-    /// integers when the coefficients do not fit words.</remarks>
+    /// <remarks>Dispatch: a sparse box of graded operands is first projected onto the pivot coordinates
+    /// of the supports' affine hull (<see cref="SupportHull"/>); a dense dividend with coefficients of two
+    /// words or more goes to Kronecker substitution (<see cref="TryDivideKronecker"/>). Otherwise the
+    /// divisor is made primitive with word coefficients and the dividend put in 128-bit form when
+    /// possible; then dense division (<see cref="DivideDense"/>) when the dividend's degree box has aligned
+    /// windows and at most <see cref="DenseBoxPerTerm"/> cells per dividend term, else heap division; with
+    /// 64-, then 128-, then 192-bit accumulators (each attempt stops with <see cref="DivideStatus.TooLarge"/>
+    /// as soon as its bound could be exceeded), then three- and four-limb coefficients, and big integers
+    /// beyond.</remarks>
     /// <returns>True with the quotient when B divides A; false otherwise.</returns>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static bool TryDivide(ReadOnlySpan<Rational> ca, int[] ea, ReadOnlySpan<Rational> cb, int[] eb,

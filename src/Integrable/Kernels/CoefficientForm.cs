@@ -112,7 +112,7 @@ internal static class CoefficientForm
             if (r.TryGetSmall(out long n, out long d))
             {
                 if (d != 1) return -1;
-                or |= MultiLimb.UnsignedAbs(n);
+                or |= IntegerMath.UnsignedAbs(n);
             }
             else if (!r.IsInteger) return -1;
             else bits = Math.Max(bits, (int)BigInteger.Abs(r.Numerator).GetBitLength());

@@ -1,6 +1,5 @@
 using System.Numerics;
 using System.Runtime.CompilerServices;
-using System.Runtime.InteropServices;
 using Integrable.Kernels.LinearAlgebra;
 using Integrable.Kernels.Univariate;
 
@@ -131,11 +130,9 @@ internal static class KroneckerProduct
         Span<ulong> limbs = stackalloc ulong[64];
         for (int t = 0; t < c.Length; t++)
         {
-            var abs = BigInteger.Abs(c[t]);
-            int words = (int)((abs.GetBitLength() + 63) / 64);
+            int words = WordArithmetic.WordCount(c[t]);
             var l = words <= limbs.Length ? limbs[..words] : new ulong[words];
-            l.Clear();
-            abs.TryWriteBytes(MemoryMarshal.AsBytes(l), out _, isUnsigned: true, isBigEndian: false);
+            WordArithmetic.WriteMagnitude(c[t], l);
             bool negative = c[t].Sign < 0;
             for (int i = 0; i < k; i++)
             {
@@ -177,6 +174,7 @@ internal static class KroneckerProduct
         var outCoef = new List<BigInteger>();
         var digits = new uint[k];
         var v = new ulong[limbsM + 1];
+        var d = new ulong[limbsM];
         for (int cell = cells - 1; cell >= 0; cell--)
         {
             if ((cell & 4095) == 0) KernelCancellation.Poll();
@@ -202,7 +200,6 @@ internal static class KroneckerProduct
             if (Compare(v, half, limbsM) > 0)
             {
                 // v − M < 0: magnitude M − v.
-                var d = new ulong[limbsM];
                 ulong borrow = 0;
                 for (int w = 0; w < limbsM; w++)
                 {

@@ -167,10 +167,8 @@ internal static class MultiLimb
     /// has more than <paramref name="maxBits"/> bits.</summary>
     public static bool TryWriteMagnitude(in BigInteger value, int maxBits, Span<ulong> limbs)
     {
-        var abs = BigInteger.Abs(value);
-        if (abs.GetBitLength() > maxBits) return false;
-        limbs.Clear();
-        abs.TryWriteBytes(MemoryMarshal.AsBytes(limbs), out _, isUnsigned: true, isBigEndian: false);
+        if (BigInteger.Abs(value).GetBitLength() > maxBits) return false;
+        LinearAlgebra.WordArithmetic.WriteMagnitude(value, limbs);
         return true;
     }
 
@@ -199,10 +197,6 @@ internal static class MultiLimb
         if (!r.IsZero) return 1;
         return TM.TryFrom(q, out quotient) ? 0 : 2;
     }
-
-    /// <summary>The magnitude of a word as an unsigned word (|long.MinValue| = 2^63 included).</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static ulong UnsignedAbs(long n) => n < 0 ? (ulong)(-(n + 1)) + 1UL : (ulong)n;
 
     /// <summary>The value of a sign and a one-limb magnitude as a word, when it fits.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

@@ -206,17 +206,7 @@ internal static partial class PolynomialDivide
         while (hlen > 1 || pi < np)
         {
             if ((++polls & 1023) == 0) KernelCancellation.Poll();
-            if (hlen == 1) ep.Slice(pi * N, N).CopyTo(exp);
-            else
-            {
-                var top = rowExp.AsSpan(hhead[1] * N, N);
-                if (pi < np && PolynomialMultiply.CompareN(ep.Slice(pi * N, N), top) > 0) ep.Slice(pi * N, N).CopyTo(exp);
-                else top.CopyTo(exp);
-            }
-
-            TAcc acc;
-            if (pi < np && ep.Slice(pi * N, N).SequenceEqual(exp)) { acc = cp[pi]; pi++; }
-            else TOps.Set(out acc, default!);
+            var acc = NextTermN<TOps, TC, TAcc>(ep, cp, ref pi, rowExp, hhead, hlen, exp);
 
             int sp = 0;
             while (hlen > 1 && rowExp.AsSpan(hhead[1] * N, N).SequenceEqual(exp))

@@ -37,16 +37,19 @@ internal static partial class PolynomialDivide
         if (bitsA < 0 || bitsB < 0) return false;
         if (!ForceKronecker && (Math.Max(bitsA, bitsB) <= 63 || !KroneckerProduct.Worth(ca.Length, cb.Length, bitsA, bitsB, box))) return false;
 
-        var stride = new long[n];
-        long st = 1;
-        for (int v = n - 1; v >= 0; v--) { stride[v] = st; st *= radix[v]; }
-        var a = new BigInteger[Cell(ea.AsSpan(0, n), minA, stride) + 1];
-        for (int t = 0; t < ca.Length; t++) a[Cell(ea.AsSpan(t * n, n), minA, stride)] = ca[t].Numerator;
-        var b = new BigInteger[Cell(eb.AsSpan(0, n), minB, stride) + 1];
+        // Cell indices: descending lex order is descending index, so the first term of each operand is its top cell.
+        var stride = PolynomialMultiply.Strides(radix);
+        var ia = new long[ca.Length];
+        var ib = new long[cb.Length];
+        PolynomialMultiply.Index(ea, n, minA, stride, ia);
+        PolynomialMultiply.Index(eb, n, minB, stride, ib);
+        var a = new BigInteger[ia[0] + 1];
+        for (int t = 0; t < ca.Length; t++) a[ia[t]] = ca[t].Numerator;
+        var b = new BigInteger[ib[0] + 1];
         var content = BigInteger.Zero;
         foreach (var c in cb) content = BigInteger.GreatestCommonDivisor(content, c.Numerator);
         if (cb[0].Sign < 0) content = -content;
-        for (int t = 0; t < cb.Length; t++) b[Cell(eb.AsSpan(t * n, n), minB, stride)] = cb[t].Numerator / content;
+        for (int t = 0; t < cb.Length; t++) b[ib[t]] = cb[t].Numerator / content;
 
         KroneckerDivisions++;
         KernelCancellation.Poll();
@@ -74,12 +77,5 @@ internal static partial class PolynomialDivide
         }
         divides = true;
         return true;
-    }
-
-    private static long Cell(ReadOnlySpan<int> e, int[] min, long[] stride)
-    {
-        long x = 0;
-        for (int v = 0; v < e.Length; v++) x += ((long)e[v] - min[v]) * stride[v];
-        return x;
     }
 }

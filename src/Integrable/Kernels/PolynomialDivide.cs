@@ -156,6 +156,28 @@ internal static partial class PolynomialDivide
         return qSum > qSumLimit ? DivideStatus.TooLarge : DivideStatus.Exact;
     }
 
+    /// <summary>The row-buffer loops' next remainder term: its exponent (the larger of the next dividend term and
+    /// the heap's root) into <paramref name="exp"/>, and the accumulator started from the dividend's coefficient there
+    /// (zero when the dividend has no such term; <paramref name="pi"/> then stays).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static TAcc NextTermN<TOps, TC, TAcc>(ReadOnlySpan<ulong> ep, ReadOnlySpan<TAcc> cp, ref int pi,
+        ulong[] rowExp, int[] hhead, int hlen, Span<ulong> exp)
+        where TOps : ICoefficientOps<TC, TAcc>
+    {
+        int N = exp.Length, np = cp.Length;
+        if (hlen == 1) ep.Slice(pi * N, N).CopyTo(exp);
+        else
+        {
+            var top = rowExp.AsSpan(hhead[1] * N, N);
+            if (pi < np && PolynomialMultiply.CompareN(ep.Slice(pi * N, N), top) > 0) ep.Slice(pi * N, N).CopyTo(exp);
+            else top.CopyTo(exp);
+        }
+        TAcc acc;
+        if (pi < np && ep.Slice(pi * N, N).SequenceEqual(exp)) { acc = cp[pi]; pi++; }
+        else TOps.Set(out acc, default!);
+        return acc;
+    }
+
     /// <summary>Multi-word <see cref="Key1.TryWord"/>: t = exp − d0 word by word, false unless t is a
     /// monomial inside the quotient's box.</summary>
     private static bool TryQuotientExponentN(ReadOnlySpan<ulong> exp, ReadOnlySpan<ulong> d0, ReadOnlySpan<ulong> guard,
@@ -224,17 +246,7 @@ internal static partial class PolynomialDivide
         while (hlen > 1 || pi < np)
         {
             if ((++polls & 1023) == 0) KernelCancellation.Poll();
-            if (hlen == 1) ep.Slice(pi * N, N).CopyTo(exp);
-            else
-            {
-                var top = rowExp.AsSpan(hhead[1] * N, N);
-                if (pi < np && PolynomialMultiply.CompareN(ep.Slice(pi * N, N), top) > 0) ep.Slice(pi * N, N).CopyTo(exp);
-                else top.CopyTo(exp);
-            }
-
-            TAcc acc;
-            if (pi < np && ep.Slice(pi * N, N).SequenceEqual(exp)) { acc = cp[pi]; pi++; }
-            else TOps.Set(out acc, default!);
+            var acc = NextTermN<TOps, TC, TAcc>(ep, cp, ref pi, rowExp, hhead, hlen, exp);
 
             int sp = 0;
             while (hlen > 1 && rowExp.AsSpan(hhead[1] * N, N).SequenceEqual(exp))
@@ -538,7 +550,7 @@ internal static partial class PolynomialDivide
         private readonly long _box;
         private ExponentLayout? _layout;
         private ulong[]? _pa, _pb, _qMaxPacked;
-        private long[]? _ia, _ib, _stride;
+        private long[]? _ia, _ib;
         private long _window;
         private bool _dense;
 
@@ -570,11 +582,11 @@ internal static partial class PolynomialDivide
             {
                 if (_ia is null)
                 {
-                    _stride = new long[_n];
-                    long st = 1;
-                    for (int v = _n - 1; v >= 0; v--) { _stride[v] = st; st *= _radix[v]; }
-                    _ia = Index(_ea, _minA);
-                    _ib = Index(_eb, _minB);
+                    var stride = PolynomialMultiply.Strides(_radix);
+                    _ia = new long[_ea.Length / _n];
+                    _ib = new long[_eb.Length / _n];
+                    PolynomialMultiply.Index(_ea, _n, _minA, stride, _ia);
+                    PolynomialMultiply.Index(_eb, _n, _minB, stride, _ib);
                 }
                 status = DivideDense<TOps, TC, TAcc>(_ia, p, _ib!, d, _window, _radix, _qRange, limit, qSumLimit, magnitude, out var qi, out var qc, out count);
                 q = status == DivideStatus.Exact ? qc[..count] : null;
@@ -604,20 +616,6 @@ internal static partial class PolynomialDivide
             q = status == DivideStatus.Exact ? qcoef[..count] : null;
             qe = new QuotientExponents(null, packed, count);
             return status;
-        }
-
-        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-        private long[] Index(int[] e, int[] min)
-        {
-            int terms = e.Length / _n;
-            var idx = new long[terms];
-            for (int t = 0; t < terms; t++)
-            {
-                long x = 0;
-                for (int v = 0; v < _n; v++) x += ((long)e[t * _n + v] - min[v]) * _stride![v];
-                idx[t] = x;
-            }
-            return idx;
         }
 
         public bool Finish(long[] q, QuotientExponents qe, Rational scale, out Rational[] coeffs, out int[] exps)

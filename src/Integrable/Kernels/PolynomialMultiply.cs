@@ -203,11 +203,14 @@ internal static partial class PolynomialMultiply
     }
 
     /// <summary>Mixed-radix strides of the product's degree box, variable 0 most significant.</summary>
-    private static long[] Strides(in ProductShape s)
+    private static long[] Strides(in ProductShape s) => Strides(s.Radix);
+
+    /// <summary>Mixed-radix strides for the given radices, variable 0 most significant.</summary>
+    internal static long[] Strides(long[] radix)
     {
-        var stride = new long[s.Nvars];
+        var stride = new long[radix.Length];
         long st = 1;
-        for (int v = s.Nvars - 1; v >= 0; v--) { stride[v] = st; st *= s.Radix[v]; }
+        for (int v = radix.Length - 1; v >= 0; v--) { stride[v] = st; st *= radix[v]; }
         return stride;
     }
 
@@ -317,7 +320,7 @@ internal static partial class PolynomialMultiply
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static void Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride, long[] idx)
+    internal static void Index(ReadOnlySpan<int> e, int n, int[] min, long[] stride, long[] idx)
     {
         int terms = e.Length / n;
         for (int t = 0; t < terms; t++)

@@ -26,7 +26,7 @@ internal struct Magnitude256 : IMagnitude<Magnitude256>
         return true;
     }
 
-    public static Magnitude256 FromWord(long value) => new() { L0 = MultiLimb.UnsignedAbs(value), Negative = value < 0 };
+    public static Magnitude256 FromWord(long value) => new() { L0 = IntegerMath.UnsignedAbs(value), Negative = value < 0 };
 
     public readonly BigInteger ToBigInteger() => Integrable.Kernels.LinearAlgebra.WordArithmetic.ToBigInteger([L0, L1, L2, L3], Negative);
 

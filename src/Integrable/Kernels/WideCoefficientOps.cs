@@ -26,7 +26,7 @@ internal struct Magnitude192 : IMagnitude<Magnitude192>
         return true;
     }
 
-    public static Magnitude192 FromWord(long value) => new() { L0 = MultiLimb.UnsignedAbs(value), Negative = value < 0 };
+    public static Magnitude192 FromWord(long value) => new() { L0 = IntegerMath.UnsignedAbs(value), Negative = value < 0 };
 
     public readonly BigInteger ToBigInteger() => Integrable.Kernels.LinearAlgebra.WordArithmetic.ToBigInteger([L0, L1, L2], Negative);
 
